@@ -1,0 +1,129 @@
+"""The project's exceptions.
+
+Every error that bad input can cause is an :class:`InputError` naming the
+field, the offending value and what is allowed, so the CLI, the case loader and
+the browser front end can show one clear line instead of a traceback.
+Several problems found at once travel together in :class:`InputErrors`.
+"""
+
+from __future__ import annotations
+
+import difflib
+from collections.abc import Iterable
+
+
+class FitcheckError(Exception):
+    """Base class of every error fitcheck raises on purpose."""
+
+
+class InputError(FitcheckError, ValueError):
+    """A value the user gave cannot be used.
+
+    Parameters
+    ----------
+    field : str
+        Where the value came from, e.g. ``"pressfit[gear].hub_outer_diameter"``.
+    value : object
+        The value as given.
+    allowed : str
+        What would have been accepted, in words.
+    hint : str, optional
+        An extra sentence, e.g. a "did you mean" suggestion.
+
+    Examples
+    --------
+    >>> e = InputError("length", "-3 mm", "a length > 0")
+    >>> str(e)
+    "length: got '-3 mm'; allowed: a length > 0"
+    """
+
+    def __init__(self, field: str, value: object, allowed: str, hint: str = "") -> None:
+        self.field = field
+        self.value = value
+        self.allowed = allowed
+        self.hint = hint
+        super().__init__(self.message)
+
+    @property
+    def message(self) -> str:
+        msg = f"{self.field}: got {self.value!r}; allowed: {self.allowed}"
+        if self.hint:
+            msg += f" ({self.hint})"
+        return msg
+
+    def within(self, prefix: str) -> InputError:
+        """The same error with its field placed under ``prefix`` (e.g. a case-file table)."""
+        field = f"{prefix}.{self.field}" if prefix else self.field
+        return InputError(field, self.value, self.allowed, self.hint)
+
+
+class InputErrors(FitcheckError, ValueError):
+    """Several :class:`InputError` found in one pass (a whole case file, say)."""
+
+    def __init__(self, errors: Iterable[InputError]) -> None:
+        self.errors = list(errors)
+        super().__init__(self.message)
+
+    @property
+    def message(self) -> str:
+        n = len(self.errors)
+        head = f"{n} problem{'s' if n != 1 else ''} in the input"
+        return head + ":\n" + "\n".join(f"  - {e.message}" for e in self.errors)
+
+
+class MethodRangeWarning(UserWarning):
+    """An input lies outside the range in which a method is valid (the result is still given)."""
+
+
+def did_you_mean(word: str, choices: Iterable[str], n: int = 3) -> str:
+    """A "did you mean …" hint for an unknown name, or an empty string.
+
+    >>> did_you_mean("C45", ["C45E", "42CrMo4", "16MnCr5"])
+    "did you mean 'C45E'?"
+    """
+    choices = list(choices)
+    lowered = {c.lower(): c for c in choices}
+    close = difflib.get_close_matches(str(word).lower(), list(lowered), n=n, cutoff=0.5)
+    if not close:
+        return ""
+    names = " or ".join(repr(lowered[c]) for c in close)
+    return f"did you mean {names}?"
+
+
+class ErrorCollector:
+    """Gather input errors and raise them together.
+
+    >>> c = ErrorCollector()
+    >>> with c.field("a"):
+    ...     raise InputError("x", 1, "2")
+    >>> len(c.errors)
+    1
+    """
+
+    def __init__(self) -> None:
+        self.errors: list[InputError] = []
+
+    def add(self, err: InputError | InputErrors, prefix: str = "") -> None:
+        items = err.errors if isinstance(err, InputErrors) else [err]
+        self.errors.extend(e.within(prefix) if prefix else e for e in items)
+
+    def field(self, prefix: str = ""):
+        collector = self
+
+        class _Ctx:
+            def __enter__(self):
+                return self
+
+            def __exit__(self, et, ev, tb):
+                if et is not None and issubclass(et, InputError | InputErrors):
+                    collector.add(ev, prefix)
+                    return True
+                return False
+
+        return _Ctx()
+
+    def raise_if_any(self) -> None:
+        if len(self.errors) == 1:
+            raise self.errors[0]
+        if self.errors:
+            raise InputErrors(self.errors)

@@ -1,0 +1,247 @@
+"""The one unit registry of fitcheck and the parsing helpers used at the edges.
+
+Inputs may be pint quantities, strings such as ``"25 mm"``, ``"0.984 in"``,
+``"30 N*m"``, ``"80 degC"``, ``"12000 rpm"``, or plain numbers (taken to be in
+core units). The numeric core works on plain floats in the coherent set
+
+=========  ==========================
+quantity   core unit
+=========  ==========================
+length     mm
+force      N
+stress     MPa (= N/mm²)
+torque     N·mm
+time       s
+speed      rad/s
+temp.      °C absolute, K difference
+density    t/mm³ (coherent with mm, N, s)
+=========  ==========================
+
+Pint costs about a hundred times a float operation, so quantities are
+stripped once, here, and never enter a vectorised kernel.
+"""
+
+from __future__ import annotations
+
+import math
+from numbers import Real
+
+import numpy as np
+import pint
+
+from .errors import InputError
+
+ureg = pint.UnitRegistry(autoconvert_offset_to_baseunit=True)
+ureg.define("micrometre = 1e-6 m = um = µm = micron")
+pint.set_application_registry(ureg)
+Q_ = ureg.Quantity
+
+#: Core unit of each kind of quantity the library parses.
+CORE: dict[str, str] = {
+    "length": "mm",
+    "small_length": "um",
+    "force": "N",
+    "stress": "MPa",
+    "torque": "N*mm",
+    "moment": "N*mm",
+    "speed": "rad/s",
+    "time": "s",
+    "density": "tonne/mm**3",
+    "expansion": "1/K",
+    "temperature_difference": "K",
+    "stiffness": "N/mm",
+    "compliance": "mm/N",
+    "dimensionless": "",
+    "angle": "rad",
+}
+
+_DIMS = {
+    "length": "[length]",
+    "small_length": "[length]",
+    "force": "[force]",
+    "stress": "[pressure]",
+    "torque": "[force] * [length]",
+    "moment": "[force] * [length]",
+    "speed": "1 / [time]",
+    "time": "[time]",
+    "density": "[mass] / [length] ** 3",
+    "expansion": "1 / [temperature]",
+    "temperature_difference": "[temperature]",
+    "stiffness": "[force] / [length]",
+    "compliance": "[length] / [force]",
+    "dimensionless": "",
+    "angle": "",
+}
+
+_EXAMPLES = {
+    "length": "'25 mm' or '0.984 in'",
+    "small_length": "'12 um' or '0.0005 in'",
+    "force": "'1500 N' or '340 lbf'",
+    "stress": "'355 MPa' or '51 ksi'",
+    "torque": "'30 N*m' or '265 lbf*in'",
+    "moment": "'30 N*m' or '265 lbf*in'",
+    "speed": "'12000 rpm' or '1257 rad/s'",
+    "time": "'3 s'",
+    "density": "'7850 kg/m**3'",
+    "expansion": "'11.5e-6 1/K'",
+    "temperature_difference": "'60 K' or '60 delta_degC'",
+    "stiffness": "'250000 N/mm'",
+    "compliance": "'4e-6 mm/N'",
+    "dimensionless": "a plain number",
+    "angle": "'30 deg'",
+}
+
+
+def _parse(value, field: str):
+    if isinstance(value, pint.Quantity):
+        if value._REGISTRY is not ureg:
+            value = Q_(value.magnitude, str(value.units))
+        return value
+    if isinstance(value, str):
+        text = value.strip().replace("·", "*").replace("×", "*").replace("Ø", "")
+        if not text:
+            raise InputError(field, value, "a number with a unit, e.g. '25 mm'")
+        try:
+            return ureg.Quantity(text)
+        except Exception as exc:  # pint raises several unrelated types here
+            raise InputError(field, value, "a number with a known unit, e.g. '25 mm'",
+                             f"could not read it: {type(exc).__name__}") from None
+    if isinstance(value, bool):
+        raise InputError(field, value, "a number with a unit, not true/false")
+    if isinstance(value, Real | np.floating | np.integer):
+        return float(value)
+    raise InputError(field, value, "a number or a string with a unit, e.g. '25 mm'")
+
+
+def to_core(value, kind: str, field: str, *, lo: float | None = None, hi: float | None = None,
+            lo_open: bool = False, hi_open: bool = False) -> float:
+    """Parse one scalar input into a float in the core unit of ``kind``.
+
+    Parameters
+    ----------
+    value : str, pint.Quantity or number
+        The input; a bare number is taken as already in the core unit.
+    kind : str
+        A key of :data:`CORE` (``"length"``, ``"force"``, ...).
+    field : str
+        The input's name, used in error messages.
+    lo, hi : float, optional
+        Allowed range in core units; ``lo_open``/``hi_open`` make a bound strict.
+
+    Returns
+    -------
+    float
+        The value in the core unit of ``kind``.
+
+    Examples
+    --------
+    >>> to_core("1 in", "length", "d")
+    25.4
+    >>> round(to_core("30 N*m", "torque", "T"), 6)
+    30000.0
+    >>> to_core("3 kg", "length", "d")
+    Traceback (most recent call last):
+    ...
+    fitcheck.errors.InputError: d: got '3 kg'; allowed: a length, e.g. '25 mm' or '0.984 in'
+    """
+    if kind not in CORE:
+        raise KeyError(kind)
+    q = _parse(value, field)
+    if isinstance(q, float):
+        out = q
+    else:
+        try:
+            if kind in ("dimensionless", "angle") and q.dimensionless:
+                out = float(q.to(CORE[kind]).magnitude) if kind == "angle" else float(q.to("").magnitude)
+            else:
+                out = float(q.to(CORE[kind]).magnitude)
+        except pint.DimensionalityError:
+            raise InputError(field, value, f"{_article(kind)}, e.g. {_EXAMPLES[kind]}") from None
+        except Exception:
+            raise InputError(field, value, f"{_article(kind)}, e.g. {_EXAMPLES[kind]}") from None
+    _check_range(out, value, kind, field, lo, hi, lo_open, hi_open)
+    return out
+
+
+def _article(kind: str) -> str:
+    name = kind.replace("_", " ")
+    if kind == "small_length":
+        name = "length"
+    return ("an " if name[0] in "aeiou" else "a ") + name
+
+
+def _check_range(out, value, kind, field, lo, hi, lo_open, hi_open):
+    if not math.isfinite(out):
+        raise InputError(field, value, "a finite number")
+    unit = CORE[kind]
+    bad_lo = lo is not None and (out <= lo if lo_open else out < lo)
+    bad_hi = hi is not None and (out >= hi if hi_open else out > hi)
+    if bad_lo or bad_hi:
+        parts = []
+        if lo is not None:
+            parts.append(f"{'>' if lo_open else '>='} {lo:g} {unit}".rstrip())
+        if hi is not None:
+            parts.append(f"{'<' if hi_open else '<='} {hi:g} {unit}".rstrip())
+        raise InputError(field, value, f"{_article(kind)} " + " and ".join(parts))
+
+
+ABSOLUTE_ZERO_C = -273.15
+
+
+def temperature_c(value, field: str, *, lo: float = ABSOLUTE_ZERO_C, hi: float | None = None) -> float:
+    """Parse an absolute temperature into °C.
+
+    Strings and quantities may be in degC, degF or K; a bare number is °C.
+
+    >>> temperature_c("80 degC", "t")
+    80.0
+    >>> round(temperature_c("300 K", "t"), 2)
+    26.85
+    >>> temperature_c("-5 K", "t")
+    Traceback (most recent call last):
+    ...
+    fitcheck.errors.InputError: t: got '-5 K'; allowed: a temperature above absolute zero (-273.15 degC = 0 K)
+    """
+    q = _parse(value, field)
+    if isinstance(q, float):
+        out = q
+    else:
+        try:
+            out = float(q.to("degC").magnitude)
+        except Exception:
+            raise InputError(field, value, "a temperature, e.g. '80 degC', '176 degF' or '353 K'") from None
+    if not math.isfinite(out):
+        raise InputError(field, value, "a finite temperature")
+    if out <= ABSOLUTE_ZERO_C + 1e-9 or out < lo:
+        raise InputError(field, value, "a temperature above absolute zero (-273.15 degC = 0 K)"
+                         if lo == ABSOLUTE_ZERO_C else f"a temperature >= {lo:g} degC")
+    if hi is not None and out > hi:
+        raise InputError(field, value, f"a temperature <= {hi:g} degC")
+    return out
+
+
+def number(value, field: str, *, lo: float | None = None, hi: float | None = None,
+           lo_open: bool = False, hi_open: bool = False) -> float:
+    """Parse a dimensionless number (a friction coefficient, a factor).
+
+    >>> number("0.12", "mu")
+    0.12
+    >>> number(0.7, "mu", lo=0.0, hi=0.5)
+    Traceback (most recent call last):
+    ...
+    fitcheck.errors.InputError: mu: got 0.7; allowed: a dimensionless >= 0 and <= 0.5
+    """
+    return to_core(value, "dimensionless", field, lo=lo, hi=hi, lo_open=lo_open, hi_open=hi_open)
+
+
+def quantity(value: float, kind: str, to: str | None = None):
+    """Put a unit back on a core-unit float: ``quantity(25.4, "length", "in")`` -> 1 inch."""
+    q = Q_(value, CORE[kind])
+    return q.to(to) if to else q
+
+
+def fmt(value: float, unit: str, digits: int = 4) -> str:
+    """Format a core-unit float with its unit for display: ``fmt(12.5, "mm") -> '12.5 mm'``."""
+    if value is None or (isinstance(value, float) and not math.isfinite(value)):
+        return f"{value} {unit}".strip()
+    return f"{value:.{digits}g} {unit}".strip()

@@ -1,0 +1,24 @@
+import logging
+import os
+
+import pytest
+
+os.environ.setdefault("MPLBACKEND", "Agg")
+logging.getLogger("streamlit.runtime.scriptrunner_utils.script_run_context").setLevel(logging.ERROR)
+logging.getLogger("streamlit.runtime.caching.cache_data_api").setLevel(logging.ERROR)
+
+
+@pytest.fixture
+def cli(capsys):
+    """Run the command line in-process: returns (exit_code, stdout, stderr)."""
+    from fitcheck.cli import main
+
+    def run(*argv):
+        try:
+            code = main(list(argv))
+        except SystemExit as e:  # argparse
+            code = e.code
+        out = capsys.readouterr()
+        return code, out.out, out.err
+
+    return run
