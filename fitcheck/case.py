@@ -1,0 +1,643 @@
+"""Design-case files: a whole drive's joints in one TOML file.
+
+A case file holds a title block, the shared operating conditions and any
+number of named joints, one array of tables per kind of joint::
+
+    format_version = 1
+
+    [title]
+    project = "Benchtop pump"
+    part = "Gearhead"
+    revision = "B"
+    author = "A. Designer"
+    date = 2025-03-14
+
+    [conditions]
+    temperature_min = "-10 degC"
+    temperature_max = "70 degC"
+    speed = "2800 rpm"
+
+    [[pressfit]]
+    name = "gear-on-shaft"
+    ...
+
+    [[bearing]]
+    name = "A-side"
+    ...
+
+    [[screws]]
+    name = "cover"
+    ...
+
+Each joint table is handed to its engine's ``from_mapping``; keys of
+``[conditions]`` that an engine knows (``speed``, ``temperature_*`` …) are its
+defaults, and a joint may override them. :func:`load` / :func:`loads` check the
+whole file and report every problem at once (:class:`~fitcheck.errors.InputErrors`);
+:func:`save` writes atomically; :func:`evaluate` runs every joint.
+
+The kinds of joint are listed in :data:`ENGINES`, a registry resolved lazily:
+an engine module is imported only when a file uses its table, and a missing
+engine is a clear input error, not an ``ImportError``.
+"""
+
+from __future__ import annotations
+
+import dataclasses
+import datetime as _dt
+import importlib
+import importlib.resources
+import math
+import os
+import tempfile
+import warnings
+from collections.abc import Iterator, Mapping
+from dataclasses import dataclass, field
+from pathlib import Path
+from types import ModuleType
+
+from . import tomlwrite
+from .checks import Check
+from .errors import ErrorCollector, FitcheckError, InputError, InputErrors, did_you_mean
+from .tomlread import MAX_BYTES, read_toml, read_toml_bytes
+from .units import temperature_c, to_core
+
+FORMAT_VERSION = 1
+"""The newest case-file format this program reads and the one it writes."""
+
+__all__ = [
+    "CaseCheck", "CaseResult", "DesignCase", "ENGINES", "Engine", "EngineUnavailable",
+    "FORMAT_VERSION", "JointResult", "Title", "demo_case", "demo_text", "dumps", "engine",
+    "evaluate", "load", "loads", "save",
+]
+
+
+# --------------------------------------------------------------------------- registry
+
+class EngineUnavailable(FitcheckError):
+    """An engine named in the registry cannot be imported or lacks part of the engine contract."""
+
+
+@dataclass(frozen=True)
+class Engine:
+    """One kind of joint a case file may hold.
+
+    Attributes
+    ----------
+    table : str
+        The case-file table name (``[[pressfit]]``).
+    attr : str
+        The :class:`DesignCase` attribute holding the inputs (``pressfits``).
+    module : str
+        The analysis module; it must define ``KEYS``, ``evaluate``, ``METHOD_NOTES``
+        and the input class.
+    input_class : str
+        Name of the input dataclass in ``module`` (``from_mapping``, ``to_mapping``).
+    label : str
+        Heading used in reports ("Press fit").
+    plots : tuple of str
+        ``"module:function"`` plot functions taking the engine's result.
+    """
+
+    table: str
+    attr: str
+    module: str
+    input_class: str
+    label: str
+    plots: tuple[str, ...] = ()
+
+    def load(self) -> ModuleType:
+        """Import the engine module and check that it follows the contract."""
+        try:
+            mod = importlib.import_module(self.module)
+        except ImportError as exc:
+            raise EngineUnavailable(
+                f"the {self.label.lower()} engine ({self.module}) is not available in this "
+                f"installation, so [[{self.table}]] tables cannot be read ({exc})") from None
+        missing = [n for n in (self.input_class, "KEYS", "evaluate") if not hasattr(mod, n)]
+        if missing:
+            raise EngineUnavailable(
+                f"the {self.label.lower()} engine ({self.module}) lacks {', '.join(missing)}")
+        return mod
+
+    def input_type(self) -> type:
+        return getattr(self.load(), self.input_class)
+
+    def keys(self) -> tuple[str, ...]:
+        """The keys a joint table of this kind may hold (``name`` included)."""
+        keys = tuple(self.load().KEYS)
+        return keys if "name" in keys else ("name", *keys)
+
+    def method_notes(self) -> tuple:
+        return tuple(getattr(self.load(), "METHOD_NOTES", ()))
+
+    def plot_functions(self) -> list:
+        """The plot functions that exist (a missing plot module is skipped, not an error)."""
+        out = []
+        for spec in self.plots:
+            mod_name, _, fn = spec.partition(":")
+            try:
+                out.append(getattr(importlib.import_module(mod_name), fn))
+            except (ImportError, AttributeError):
+                continue
+        return out
+
+
+ENGINES: dict[str, Engine] = {
+    "pressfit": Engine("pressfit", "pressfits", "fitcheck.pressfit", "PressFitInput", "Press fit",
+                       ("fitcheck.plots.pressfit:plot_wall_stresses",
+                        "fitcheck.plots.pressfit:plot_capacity_band")),
+    "bearing": Engine("bearing", "bearings", "fitcheck.bearings", "BearingSeatInput",
+                      "Bearing seat", ("fitcheck.plots.bearings:plot_clearance_budget",)),
+    "screws": Engine("screws", "screws", "fitcheck.screws", "ScrewJointInput", "Screw joint",
+                     ("fitcheck.plots.screws:plot_joint_diagram",)),
+}
+"""Table name → engine. Add an entry (and a :class:`DesignCase` field named ``attr``) to plug in a
+new kind of joint; see DEVELOPERS.md, "Case files and reports"."""
+
+
+def engine(table: str) -> Engine:
+    """The registry entry of a table name, with a "did you mean" for a typo."""
+    try:
+        return ENGINES[table]
+    except KeyError:
+        raise InputError("table", table, "one of " + ", ".join(ENGINES),
+                         did_you_mean(table, ENGINES)) from None
+
+
+# --------------------------------------------------------------------------- the case
+
+TITLE_KEYS = ("project", "part", "revision", "author", "date")
+
+
+@dataclass(frozen=True)
+class Title:
+    """The title block of a calculation: what it is about, who made it, when."""
+
+    project: str = ""
+    part: str = ""
+    revision: str = ""
+    author: str = ""
+    date: str | _dt.date = ""
+
+    def to_mapping(self) -> dict:
+        return {k: getattr(self, k) for k in TITLE_KEYS if getattr(self, k) != ""}
+
+
+#: Shared operating conditions understood by the case file itself (others an engine knows are
+#: passed through to it): key → (kind, lower, upper) in core units, with the kind "temperature"
+#: for absolute temperatures in °C.
+CONDITION_KEYS: dict[str, tuple[str, float, float]] = {
+    "temperature_min": ("temperature", -100.0, 500.0),      # common practice: plausibility bounds
+    "temperature_max": ("temperature", -100.0, 500.0),      # common practice
+    "temperature_shaft": ("temperature", -100.0, 500.0),    # common practice
+    "temperature_hub": ("temperature", -100.0, 500.0),      # common practice
+    "temperature_housing": ("temperature", -100.0, 500.0),  # common practice
+    "temperature_assembly": ("temperature", -200.0, 600.0),  # common practice (LN2 cooling … heating)
+    "speed": ("speed", 0.0, 200_000 * 2 * math.pi / 60),    # common practice: up to 200 000 rpm
+}
+
+
+@dataclass(frozen=True)
+class DesignCase:
+    """A design case: title block, shared conditions and the joints of one drive.
+
+    ``pressfits``, ``bearings`` and ``screws`` are tuples of engine inputs
+    (``PressFitInput``, ``BearingSeatInput``, ``ScrewJointInput``); ``names``
+    holds the joint names in the same order, one tuple per table. ``conditions``
+    keeps the ``[conditions]`` values as written.
+    """
+
+    title: Title = field(default_factory=Title)
+    conditions: dict = field(default_factory=dict)
+    pressfits: tuple = ()
+    bearings: tuple = ()
+    screws: tuple = ()
+    names: dict = field(default_factory=dict)
+    format_version: int = FORMAT_VERSION
+
+    def joints(self) -> Iterator[tuple[Engine, str, object]]:
+        """Every joint as ``(engine, name, input)`` in file order by kind."""
+        for eng in ENGINES.values():
+            inputs = getattr(self, eng.attr, ())
+            names = self.names.get(eng.table, ())
+            for i, inp in enumerate(inputs):
+                yield eng, _joint_name(inp, names, i, eng.table), inp
+
+    def __len__(self) -> int:
+        return sum(len(getattr(self, e.attr, ())) for e in ENGINES.values())
+
+
+def _joint_name(inp, names, i, table) -> str:
+    name = getattr(inp, "name", None)
+    if isinstance(name, str) and name:
+        return name
+    if i < len(names):
+        return names[i]
+    return f"{table}-{i + 1}"
+
+
+def joint_label(table: str, name: str) -> str:
+    """How a joint is named in messages and tables: ``pressfit[gear-on-shaft]``."""
+    return f"{table}[{name}]"
+
+
+# --------------------------------------------------------------------------- reading
+
+def load(path: str | os.PathLike) -> DesignCase:
+    """Read and validate a case file (at most 1 MiB); every problem is reported at once."""
+    data = read_toml(path)
+    return from_document(data, source=str(path))
+
+
+def loads(text: str | bytes, source: str = "case file") -> DesignCase:
+    """Validate a case given as TOML text or bytes."""
+    raw = text.encode("utf-8", errors="surrogatepass") if isinstance(text, str) else bytes(text)
+    if isinstance(text, str) and len(raw) > MAX_BYTES:
+        raise InputError(source, f"{len(raw)} bytes", f"a file of at most {MAX_BYTES} bytes (1 MiB)")
+    try:
+        data = read_toml_bytes(raw, source)
+    except UnicodeEncodeError:  # pragma: no cover - lone surrogates in a str
+        raise InputError(source, "text with invalid characters", "UTF-8 TOML text") from None
+    return from_document(data, source=source)
+
+
+def from_document(data: Mapping, source: str = "case file") -> DesignCase:
+    """Validate an already parsed TOML document (a mapping) into a :class:`DesignCase`."""
+    errs = ErrorCollector()
+    if not isinstance(data, Mapping):
+        raise InputError(source, type(data).__name__, "a TOML table")
+    _check_version(data, source)
+
+    allowed_top = ("format_version", "title", "conditions", *ENGINES)
+    for key in data:
+        if key not in allowed_top:
+            errs.add(InputError(key, _show(data[key]), "a top-level key or table: "
+                                + ", ".join(allowed_top), did_you_mean(key, allowed_top)))
+
+    title = _read_title(data.get("title", {}), errs)
+
+    # the engines this file uses (imported lazily, only these)
+    used: dict[str, Engine] = {}
+    for table, eng in ENGINES.items():
+        if table in data:
+            try:
+                eng.load()
+                used[table] = eng
+            except EngineUnavailable as exc:
+                errs.add(InputError(f"[[{table}]]", f"{_count(data[table])} table(s)",
+                                    "a kind of joint this installation can check", str(exc)))
+
+    engine_keys = {t: e.keys() for t, e in used.items()}
+    conditions = _read_conditions(data.get("conditions", {}), engine_keys, errs)
+
+    inputs: dict[str, list] = {e.attr: [] for e in ENGINES.values()}
+    names: dict[str, tuple[str, ...]] = {}
+    seen: dict[str, str] = {}
+    for table, eng in used.items():
+        entries = data[table]
+        if isinstance(entries, Mapping):
+            errs.add(InputError(table, "a single [" + table + "] table",
+                                f"an array of tables: write [[{table}]] (one per joint)"))
+            continue
+        if not isinstance(entries, list):
+            errs.add(InputError(table, _show(entries), f"an array of tables [[{table}]]"))
+            continue
+        cls = eng.input_type()
+        keys = engine_keys[table]
+        got_names = []
+        for i, entry in enumerate(entries):
+            label = joint_label(table, f"#{i + 1}")
+            if not isinstance(entry, Mapping):
+                errs.add(InputError(label, _show(entry), "a table of keys (name = ..., ...)"))
+                continue
+            name = entry.get("name")
+            if not isinstance(name, str) or not name.strip():
+                errs.add(InputError(f"{label}.name", name, "a non-empty name for the joint, "
+                                    "e.g. name = \"gear-on-shaft\""))
+                name = None
+            else:
+                name = name.strip()
+                label = joint_label(table, name)
+                if name in seen:
+                    errs.add(InputError(f"{label}.name", name, "a name not used by another joint "
+                                        "of the case", f"already used by {seen[name]}"))
+                else:
+                    seen[name] = label
+            mapping = {}
+            for key, value in entry.items():
+                if key not in keys:
+                    errs.add(InputError(f"{label}.{key}", _show(value), f"a key of [[{table}]]: "
+                                        + ", ".join(keys), did_you_mean(key, keys)))
+                elif key != "name" or "name" in eng.load().KEYS:
+                    mapping[key] = value
+            if name is not None and "name" in eng.load().KEYS:
+                mapping["name"] = name
+            inherited = {k: v for k, v in conditions.items() if k in keys and k not in entry}
+            mapping = {**inherited, **mapping}
+            try:
+                inp = cls.from_mapping(mapping, label)
+            except (InputError, InputErrors) as exc:
+                for e in exc.errors if isinstance(exc, InputErrors) else [exc]:
+                    errs.add(_blame_conditions(e, label, inherited))
+                continue
+            inputs[eng.attr].append(inp)
+            got_names.append(name or f"{table}-{i + 1}")
+        names[table] = tuple(got_names)
+
+    errs.raise_if_any()
+    return DesignCase(title=title, conditions=conditions, names=names,
+                      **{k: tuple(v) for k, v in inputs.items()})
+
+
+def _check_version(data: Mapping, source: str) -> None:
+    if "format_version" not in data:
+        raise InputError("format_version", None, f"format_version = {FORMAT_VERSION} at the top of "
+                         "the file (every case file states the format it is written in)")
+    v = data["format_version"]
+    if isinstance(v, bool) or not isinstance(v, int):
+        raise InputError("format_version", _show(v), f"a whole number; this fitcheck reads "
+                         f"format_version ≤ {FORMAT_VERSION}")
+    if v > FORMAT_VERSION:
+        raise InputError("format_version", v, f"format_version ≤ {FORMAT_VERSION}",
+                         f"the file was written by a newer fitcheck; this one reads "
+                         f"format_version ≤ {FORMAT_VERSION}: update fitcheck to read it")
+    if v < 1:
+        raise InputError("format_version", v, f"a format_version from 1 to {FORMAT_VERSION}")
+
+
+def _read_title(t, errs: ErrorCollector) -> Title:
+    if not isinstance(t, Mapping):
+        errs.add(InputError("title", _show(t), "a [title] table with " + ", ".join(TITLE_KEYS)))
+        return Title()
+    vals = {}
+    for key, v in t.items():
+        if key not in TITLE_KEYS:
+            errs.add(InputError(f"title.{key}", _show(v), "one of " + ", ".join(TITLE_KEYS),
+                                did_you_mean(key, TITLE_KEYS)))
+        elif key == "date" and isinstance(v, _dt.date) and not isinstance(v, _dt.datetime):
+            vals[key] = v
+        elif not isinstance(v, str):
+            what = "a text or a TOML date (date = 2025-03-14)" if key == "date" else "a text in quotes"
+            errs.add(InputError(f"title.{key}", _show(v), what))
+        elif len(v) > 500:
+            errs.add(InputError(f"title.{key}", f"{len(v)} characters", "at most 500 characters"))
+        else:
+            vals[key] = v
+    return Title(**vals)
+
+
+def _read_conditions(c, engine_keys: Mapping[str, tuple[str, ...]], errs: ErrorCollector) -> dict:
+    if not isinstance(c, Mapping):
+        errs.add(InputError("conditions", _show(c), "a [conditions] table"))
+        return {}
+    known = dict.fromkeys(CONDITION_KEYS)
+    for keys in engine_keys.values():
+        known.update(dict.fromkeys(k for k in keys if k != "name"))
+    out, parsed = {}, {}
+    for key, v in c.items():
+        if key not in known:
+            errs.add(InputError(f"conditions.{key}", _show(v), "a shared condition: "
+                                + ", ".join(CONDITION_KEYS) + " (or a key the joints' engines know)",
+                                did_you_mean(key, known)))
+            continue
+        spec = CONDITION_KEYS.get(key)
+        if spec is not None:
+            kind, lo, hi = spec
+            try:
+                if isinstance(v, bool) or not isinstance(v, str | int | float):
+                    raise InputError(key, _show(v), "a value with a unit, e.g. '80 degC' or '3000 rpm'")
+                if kind == "temperature":
+                    parsed[key] = temperature_c(v, key, lo=lo, hi=hi)
+                else:
+                    parsed[key] = to_core(v, kind, key, lo=lo, hi=hi)
+            except InputError as exc:
+                errs.add(exc, "conditions")
+                continue
+        out[key] = v
+    tmin, tmax = parsed.get("temperature_min"), parsed.get("temperature_max")
+    if tmin is not None and tmax is not None and tmin > tmax:
+        errs.add(InputError("conditions.temperature_min", c["temperature_min"],
+                            f"a temperature ≤ temperature_max ({c['temperature_max']!r})"))
+    return out
+
+
+def _blame_conditions(e: InputError, label: str, inherited: Mapping) -> InputError:
+    """Name ``[conditions]`` as the source of a bad value a joint inherited from it."""
+    for key in inherited:
+        if e.field == f"{label}.{key}" or e.field.startswith(f"{label}.{key}."):
+            rest = e.field[len(label) + 1:]
+            return InputError(f"conditions.{rest} (as used by {label})", e.value, e.allowed, e.hint)
+    if not e.field.startswith(label):
+        return e.within(label)
+    return e
+
+
+def _show(v):
+    """A short form of a value for an error message."""
+    if isinstance(v, Mapping):
+        return "a table"
+    if isinstance(v, list):
+        return f"an array of {len(v)}"
+    if isinstance(v, str) and len(v) > 80:
+        return v[:77] + "..."
+    return v
+
+
+def _count(v) -> int:
+    return len(v) if isinstance(v, list) else 1
+
+
+# --------------------------------------------------------------------------- writing
+
+def to_document(case: DesignCase) -> dict:
+    """The case as a plain TOML document (what :func:`dumps` writes)."""
+    doc: dict = {"format_version": FORMAT_VERSION}
+    title = case.title.to_mapping()
+    if title:
+        doc["title"] = title
+    if case.conditions:
+        doc["conditions"] = dict(case.conditions)
+    for eng, name, inp in case.joints():
+        mapping = inp.to_mapping()
+        table = {"name": name}
+        for k, v in mapping.items():
+            if k == "name" or v is None:
+                continue
+            if k in case.conditions and case.conditions[k] == v:
+                continue  # inherited from [conditions] on reading
+            table[k] = v
+        doc.setdefault(eng.table, []).append(table)
+    return doc
+
+
+def dumps(case: DesignCase) -> str:
+    """The case as TOML text; :func:`loads` of it gives an equal case."""
+    header = ("# fitcheck design case (format_version 1). Engineering estimate: verify by test;\n"
+              "# the applicable standards, local codes and licensed professional practice govern.\n")
+    return header + tomlwrite.dumps(to_document(case))
+
+
+def save(case: DesignCase, path: str | os.PathLike) -> Path:
+    """Write the case to ``path`` atomically.
+
+    The text goes to a temporary file in the same folder, is flushed to disk and
+    then renamed over ``path`` with :func:`os.replace`; a crash or an error at any
+    point leaves the old file as it was and no temporary file behind.
+    """
+    target = Path(path)
+    data = dumps(case).encode("utf-8")
+    folder = target.parent if str(target.parent) else Path(".")
+    fd, tmp = tempfile.mkstemp(prefix=f".{target.name}.", suffix=".tmp", dir=folder)
+    try:
+        with os.fdopen(fd, "wb") as f:
+            f.write(data)
+            f.flush()
+            os.fsync(f.fileno())
+        try:
+            mode = target.stat().st_mode & 0o777
+        except FileNotFoundError:
+            umask = os.umask(0)
+            os.umask(umask)
+            mode = 0o666 & ~umask
+        os.chmod(tmp, mode)
+        os.replace(tmp, target)
+    except BaseException:
+        try:
+            os.unlink(tmp)
+        except FileNotFoundError:
+            pass
+        raise
+    return target
+
+
+# --------------------------------------------------------------------------- evaluating
+
+@dataclass(frozen=True)
+class JointResult:
+    """One joint's result within a case."""
+
+    table: str
+    name: str
+    input: object
+    result: object
+    warnings: tuple[str, ...] = ()
+
+    @property
+    def label(self) -> str:
+        return joint_label(self.table, self.name)
+
+    @property
+    def checks(self) -> tuple[Check, ...]:
+        return tuple(self.result.checks)
+
+    @property
+    def ok(self) -> bool:
+        return bool(self.result.ok)
+
+
+@dataclass(frozen=True)
+class CaseCheck:
+    """A check together with the joint it belongs to."""
+
+    joint: str
+    table: str
+    check: Check
+
+    @property
+    def label(self) -> str:
+        return joint_label(self.table, self.joint)
+
+    @property
+    def passed(self) -> bool:
+        return self.check.passed
+
+    @property
+    def margin(self) -> float:
+        return self.check.margin
+
+    def to_dict(self) -> dict:
+        return {"joint": self.joint, "kind": self.table, **self.check.to_dict()}
+
+
+@dataclass(frozen=True)
+class CaseResult:
+    """Every joint's result of a case, and the case's checks flattened with joint names."""
+
+    case: DesignCase
+    joints: tuple[JointResult, ...]
+
+    @property
+    def checks(self) -> tuple[CaseCheck, ...]:
+        return tuple(CaseCheck(j.name, j.table, c) for j in self.joints for c in j.checks)
+
+    @property
+    def ok(self) -> bool:
+        """True when the case has at least one check and every check passes."""
+        checks = self.checks
+        return bool(checks) and all(c.passed for c in checks) and all(j.ok for j in self.joints)
+
+    def by_margin(self) -> list[CaseCheck]:
+        """The checks ordered worst margin first (failures lead)."""
+        return sorted(self.checks, key=lambda c: (c.margin, c.label, c.check.name))
+
+    def worst(self) -> CaseCheck | None:
+        ordered = self.by_margin()
+        return ordered[0] if ordered else None
+
+    @property
+    def warnings(self) -> list[str]:
+        return [f"{j.label}: {w}" for j in self.joints for w in j.warnings]
+
+    def to_dict(self) -> dict:
+        return {
+            "title": {k: str(v) for k, v in self.case.title.to_mapping().items()},
+            "ok": self.ok,
+            "checks": [c.to_dict() for c in self.checks],
+            "warnings": self.warnings,
+        }
+
+
+def evaluate(case: DesignCase) -> CaseResult:
+    """Evaluate every joint of the case.
+
+    Warnings an engine gives (e.g. :class:`~fitcheck.errors.MethodRangeWarning`) are kept with
+    the joint; input errors an engine finds while evaluating are gathered and raised together.
+    """
+    errs = ErrorCollector()
+    out = []
+    for eng, name, inp in case.joints():
+        mod = eng.load()
+        with warnings.catch_warnings(record=True) as caught:
+            warnings.simplefilter("always")
+            try:
+                result = mod.evaluate(inp)
+            except (InputError, InputErrors) as exc:
+                label = joint_label(eng.table, name)
+                for e in exc.errors if isinstance(exc, InputErrors) else [exc]:
+                    errs.add(e if e.field.startswith(label) else e.within(label))
+                continue
+        msgs = tuple(dict.fromkeys(str(w.message) for w in caught
+                                   if not issubclass(w.category, DeprecationWarning)))
+        out.append(JointResult(eng.table, name, inp, result, msgs))
+    errs.raise_if_any()
+    return CaseResult(case, tuple(out))
+
+
+# --------------------------------------------------------------------------- demo
+
+DEMO_RESOURCE = "benchtop_pump.toml"
+
+
+def demo_text() -> str:
+    """The demo case file (gearhead of a benchtop pump) as TOML text."""
+    return importlib.resources.files("fitcheck.demo").joinpath(DEMO_RESOURCE).read_text("utf-8")
+
+
+def demo_case() -> DesignCase:
+    """The demo case: the gearhead of a benchtop pump (invented, realistic values)."""
+    return loads(demo_text(), source=f"fitcheck/demo/{DEMO_RESOURCE}")
+
+
+def replace(case: DesignCase, **changes) -> DesignCase:
+    """A copy of the case with some fields changed (``dataclasses.replace``)."""
+    return dataclasses.replace(case, **changes)
