@@ -4,5 +4,11 @@ import streamlit as st
 
 from fitcheck.ui import app
 
-st.set_page_config(page_title="fitcheck", layout="wide")
-app.run()
+st.set_page_config(page_title="fitcheck — seats, press fits, screws", page_icon="⚙️",
+                   layout="wide", initial_sidebar_state="expanded")
+page = st.navigation(app.pages())
+app.frame()
+try:
+    page.run()
+finally:
+    app.finish()

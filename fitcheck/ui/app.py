@@ -1,0 +1,90 @@
+"""The page list and the frame every page shares (state, sidebar, caution, address).
+
+``streamlit_app.py`` calls :func:`pages` for ``st.navigation``, :func:`frame`
+before the page runs and :func:`finish` after it. Each page is a module of
+this package run as a script by Streamlit (it ends with
+``if __name__ == "__main__": render()``), so importing it does nothing.
+"""
+
+from __future__ import annotations
+
+from dataclasses import dataclass
+from pathlib import Path
+
+import streamlit as st
+
+import fitcheck
+from fitcheck.ui import state, unitsys
+
+HERE = Path(__file__).parent
+
+
+@dataclass(frozen=True)
+class PageSpec:
+    module: str      # file in fitcheck/ui/ (without .py)
+    title: str       # shown in the navigation and as the page heading
+    url_path: str    # the page's address
+    icon: str
+    section: str
+
+
+#: Every page, in navigation order. Add a page: write fitcheck/ui/<module>.py with a render()
+#: function and the __main__ guard, then add one line here (see DEVELOPERS.md).
+PAGES: tuple[PageSpec, ...] = (
+    PageSpec("fit_limits", "Fit limits", "fit-limits", ":material/straighten:", "Joints"),
+    PageSpec("press_fit", "Press fit", "press-fit", ":material/compress:", "Joints"),
+    PageSpec("bearing_seat", "Bearing seats", "bearing-seats", ":material/radio_button_checked:",
+             "Joints"),
+    PageSpec("housing_screws", "Housing screws", "housing-screws", ":material/hardware:", "Joints"),
+    PageSpec("whole_case", "Case verdict", "case-verdict", ":material/fact_check:", "Case"),
+    PageSpec("case_file", "Case file and report", "case-file", ":material/description:", "Case"),
+)
+
+
+def available() -> list[PageSpec]:
+    """The pages whose module is present (all of them in a complete installation)."""
+    return [p for p in PAGES if (HERE / f"{p.module}.py").is_file()]
+
+
+def pages() -> dict[str, list]:
+    """``st.Page`` objects by section, for ``st.navigation``."""
+    out: dict[str, list] = {}
+    for i, p in enumerate(available()):
+        out.setdefault(p.section, []).append(
+            st.Page(HERE / f"{p.module}.py", title=p.title, url_path=p.url_path, icon=p.icon,
+                    default=(i == 0)))
+    return out
+
+
+def frame() -> None:
+    """Before a page: open the working case, draw the sidebar (unit system, case name)."""
+    state.init()
+    ss = st.session_state
+    with st.sidebar:
+        ss.setdefault("ui.units", state.system())
+        st.segmented_control("Units", unitsys.SYSTEMS, key="ui.units", on_change=state.switch_units,
+                             required=True, help="Inputs and results in SI (mm, N, MPa, N·m) or "
+                             "inch units (in, lbf, ksi, lbf·in). Inputs are rewritten in the "
+                             "new units; switching back restores what you typed.")
+        title = state.doc().get("title", {})
+        if isinstance(title, dict) and title:
+            parts = [str(title.get(k, "")) for k in ("project", "part") if title.get(k)]
+            rev = title.get("revision")
+            st.caption("Open case: **" + " — ".join(parts) + "**"
+                       + (f", rev. {rev}" if rev else ""))
+        st.caption(f"fitcheck {fitcheck.__version__}")
+
+
+def finish() -> None:
+    """After a page: keep the case and the unit system in the address (a reload keeps the work)."""
+    state.sync_address()
+
+
+def heading(title: str, lead: str) -> None:
+    """The page heading, its one-line purpose and the caution."""
+    from fitcheck.ui import widgets
+
+    st.title(title)
+    st.caption(lead)
+    widgets.caution()
+    widgets.notice()

@@ -1,0 +1,205 @@
+"""Widget and display helpers shared by the pages (no physics here: the library decides, we show)."""
+
+from __future__ import annotations
+
+import math
+from collections.abc import Iterable, Mapping, Sequence
+
+import matplotlib.pyplot as plt
+import pandas as pd
+import streamlit as st
+
+import fitcheck
+from fitcheck.errors import InputError
+from fitcheck.ui import state, unitsys
+
+PASS, FAIL = "✔ holds", "✘ FAILS"
+
+
+# --------------------------------------------------------------------------- page furniture
+
+def caution() -> None:
+    """The caution every page carries (``fitcheck.CAUTION``)."""
+    st.warning(fitcheck.CAUTION, icon="⚠️")
+
+
+def figure(fig) -> None:
+    """Show a matplotlib figure and close it (figures are never left open between runs)."""
+    try:
+        st.pyplot(fig, clear_figure=False, width="stretch")
+    finally:
+        plt.close(fig)
+
+
+def notice() -> None:
+    msg = st.session_state.pop(state.NOTICE, None)
+    if msg:
+        st.info(msg)
+
+
+# --------------------------------------------------------------------------- inputs bound to the case
+
+def _as_text(v) -> str:
+    if isinstance(v, str):
+        return v
+    if isinstance(v, bool):
+        return "true" if v else "false"
+    if isinstance(v, float) and v.is_integer():
+        return repr(v)
+    return "" if v is None else str(v)
+
+
+def _from_text(text: str, old):
+    """A typed text back into the document; numbers stay numbers when they were numbers."""
+    t = text.strip()
+    if isinstance(old, bool):
+        return t.lower() in ("true", "yes", "1")
+    if isinstance(old, int | float) and not isinstance(old, bool):
+        try:
+            return int(t) if isinstance(old, int) and t.lstrip("+-").isdigit() else float(t)
+        except ValueError:
+            return t  # the engine names the problem
+    return t
+
+
+def pull(entry: dict, wkey: str, key: str) -> None:
+    """Before the page is drawn: copy a widget's value into the document, or seed the widget.
+
+    Streamlit holds a changed widget's value in the session before the script
+    reruns, so the document (and the results) are up to date before any widget
+    is drawn; a widget Streamlit forgot on another page is seeded from the document.
+    """
+    ss = st.session_state
+    if wkey in ss:
+        v = ss[wkey]
+        if isinstance(v, str):
+            if v.strip():
+                entry[key] = _from_text(v, entry.get(key))
+            else:
+                entry.pop(key, None)
+        elif v is not None:
+            entry[key] = v
+    else:
+        if key in entry and not isinstance(entry[key], dict | list):
+            ss[wkey] = entry[key] if isinstance(entry[key], bool) else _as_text(entry[key])
+        else:
+            ss[wkey] = ""
+
+
+def text_field(label: str, wkey: str, help: str | None = None, error: InputError | None = None,
+               placeholder: str | None = None) -> None:
+    """A text input (a value with its unit) with the library's message for it right below."""
+    st.text_input(label, key=wkey, help=help, placeholder=placeholder)
+    if error is not None:
+        st.error(error_text(error), icon="✋")
+
+
+def choice_field(label: str, wkey: str, options: Sequence[str], help: str | None = None,
+                 error: InputError | None = None) -> None:
+    ss = st.session_state
+    opts = list(options)
+    if ss.get(wkey) not in opts:
+        if ss.get(wkey):
+            opts = [ss[wkey], *opts]  # keep what the file says; the engine names the problem
+        else:
+            ss[wkey] = opts[0]
+    st.selectbox(label, opts, key=wkey, help=help)
+    if error is not None:
+        st.error(error_text(error), icon="✋")
+
+
+def error_text(e: InputError) -> str:
+    text = f"**{e.field}**: got `{e.value!r}` — allowed: {e.allowed}"
+    if e.hint:
+        text += f" ({e.hint})"
+    return text
+
+
+def match_errors(errors: Iterable[InputError], label: str, keys: Iterable[str]) -> tuple[dict, list]:
+    """Sort the library's errors into those of a key of the joint ``label`` and the rest."""
+    by_key: dict[str, InputError] = {}
+    rest: list[InputError] = []
+    keys = sorted(keys, key=len, reverse=True)
+    for e in errors:
+        f = e.field
+        hit = None
+        for k in keys:
+            for stem in (f"{label}.{k}", f"conditions.{k}"):
+                if f == stem or f.startswith(stem + ".") or f.startswith(stem + "[") \
+                        or f.startswith(stem + " "):
+                    hit = k
+                    break
+            if hit:
+                break
+        if hit and hit not in by_key:
+            by_key[hit] = e
+        else:
+            rest.append(e)
+    return by_key, rest
+
+
+# --------------------------------------------------------------------------- results
+
+def checks_table(checks: Iterable, system: str, joint_of=None) -> pd.DataFrame:
+    """Checks as a table: verdict, name, value, limit, margin, reference (values in the unit system).
+
+    ``checks`` are :class:`fitcheck.checks.Check` objects or ``fitcheck.case.CaseCheck``
+    (then a joint column is added).
+    """
+    rows = []
+    for c in checks:
+        chk = getattr(c, "check", c)
+        m = chk.margin
+        row = {}
+        if hasattr(c, "check"):
+            row["joint"] = c.label
+        row.update({
+            "verdict": PASS if chk.passed else FAIL,
+            "check": chk.name,
+            "value": unitsys.show_in(chk.value, chk.unit, system),
+            "must be": f"{chk.sense} {unitsys.show_in(chk.limit, chk.unit, system)}",
+            "margin": "—" if not math.isfinite(m) else f"{m * 100:+.1f} %",
+            "reference": chk.reference,
+        })
+        if chk.note:
+            row["note"] = chk.note
+        rows.append(row)
+    return pd.DataFrame(rows)
+
+
+def show_checks(checks: Sequence, system: str, key: str) -> None:
+    df = checks_table(checks, system)
+    if df.empty:
+        st.info("No checks for this joint.")
+        return
+    st.dataframe(df, hide_index=True, width="stretch", key=key,
+                 column_config={"reference": st.column_config.TextColumn(width="large")})
+
+
+def verdict_banner(ok: bool, worst=None, system: str = "SI") -> None:
+    """One line saying whether every check holds, naming the weakest one."""
+    if worst is None:
+        (st.success if ok else st.error)("All checks hold." if ok else "A check fails.")
+        return
+    chk = getattr(worst, "check", worst)
+    where = f"{worst.label}: " if hasattr(worst, "label") else ""
+    m = chk.margin
+    mtxt = "" if not math.isfinite(m) else f" (margin {m * 100:+.1f} %)"
+    if ok:
+        st.success(f"Every check holds. Smallest margin: {where}{chk.name}{mtxt}.", icon="✅")
+    else:
+        st.error(f"Does not hold: {where}{chk.name} — "
+                 f"{unitsys.show_in(chk.value, chk.unit, system)} against "
+                 f"{chk.sense} {unitsys.show_in(chk.limit, chk.unit, system)}{mtxt}.", icon="🛑")
+
+
+def warnings_box(messages: Iterable[str]) -> None:
+    msgs = list(messages)
+    if msgs:
+        st.warning("Outside a method's range of validity:\n\n" + "\n".join(f"- {m}" for m in msgs))
+
+
+def kv_table(rows: Mapping[str, str] | Sequence[tuple[str, str]], key: str | None = None) -> None:
+    items = list(rows.items()) if isinstance(rows, Mapping) else list(rows)
+    st.dataframe(pd.DataFrame(items, columns=["quantity", "value"]), hide_index=True,
+                 width="stretch", key=key)
