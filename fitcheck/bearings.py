@@ -585,7 +585,7 @@ class BearingSeatInput:
             take(k, lambda v, k: to_core(v, "small_length", k, lo=0, hi=100))
         for k in ("temperature_inner", "temperature_outer", "temperature_shaft",
                   "temperature_housing", "temperature_assembly"):
-            take(k, lambda v, k: temperature_c(v, k, lo=-100.0, hi=300.0))
+            take(k, _temperature)
         take("axial_force", lambda v, k: to_core(v, "force", k, lo=0))
         take("axial_location", lambda v, k: _choice(v, AXIAL_LOCATIONS, k))
         take("clearance_min", lambda v, k: to_core(v, "small_length", k, lo=-200, hi=500))
@@ -630,6 +630,13 @@ class BearingSeatInput:
         return out
 
 
+def _temperature(v, k):
+    t = temperature_c(v, k)  # absolute zero first, with its own message
+    if not -100.0 <= t <= 300.0:  # common practice: plausibility bounds of a bearing seat
+        raise InputError(k, v, "a temperature from -100 degC to 300 degC")
+    return t
+
+
 def _text(v, k):
     if not isinstance(v, str):
         raise InputError(k, v, "a text in quotes")
@@ -659,7 +666,9 @@ def _zone(size: float, cls: str, field: str):
     try:
         return fits.zone(size, cls)
     except InputError as exc:
-        raise InputError(field, cls, f"an ISO 286 class defined at {size:g} mm", exc.allowed) from None
+        hint = "; ".join(x for x in (exc.allowed, exc.hint) if x)
+        raise InputError(field, cls, f"an ISO 286 {'shaft' if field == 'shaft' else 'hole'} class "
+                         f"defined at {size:g} mm", hint) from None
 
 
 # --------------------------------------------------------------------------- result
