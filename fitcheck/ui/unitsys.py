@@ -154,3 +154,14 @@ def convert_text(text: str, system: str) -> str:
     except Exception:
         return text
     return f"{mag:.6g} {target}"
+
+
+def show_range(pair, kind: str, system: str, digits: int | None = None) -> str:
+    """A (min, max) pair of core-unit floats with the unit once: ``-8.27 … 20 µm``."""
+    lo, hi = (float(x) for x in pair)
+    if not (math.isfinite(lo) and math.isfinite(hi)):
+        return f"{show(lo, kind, system, digits)} … {show(hi, kind, system, digits)}"
+    unit = unit_for(kind, system)
+    d = digits if digits is not None else digits_for(unit)
+    a, b = magnitude(lo, kind, system), magnitude(hi, kind, system)
+    return f"{a:.{d}g} … {b:.{d}g} {symbol(unit)}".strip()

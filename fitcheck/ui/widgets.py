@@ -95,7 +95,8 @@ def text_field(label: str, wkey: str, help: str | None = None, error: InputError
 
 
 def choice_field(label: str, wkey: str, options: Sequence[str], help: str | None = None,
-                 error: InputError | None = None) -> None:
+                 error: InputError | None = None, empty: str = "not set") -> None:
+    """A selectbox; the empty option ("" = the key is left out of the file) reads ``empty``."""
     ss = st.session_state
     opts = list(options)
     if ss.get(wkey) not in opts:
@@ -103,7 +104,7 @@ def choice_field(label: str, wkey: str, options: Sequence[str], help: str | None
             opts = [ss[wkey], *opts]  # keep what the file says; the engine names the problem
         else:
             ss[wkey] = opts[0]
-    st.selectbox(label, opts, key=wkey, help=help)
+    st.selectbox(label, opts, key=wkey, help=help, format_func=lambda o: o if o else empty)
     if error is not None:
         st.error(error_text(error), icon="✋")
 
