@@ -73,10 +73,10 @@ def pull(entry: dict, wkey: str, key: str) -> None:
     if wkey in ss:
         v = ss[wkey]
         if isinstance(v, str):
-            if v.strip():
-                entry[key] = _from_text(v, entry.get(key))
-            else:
+            if not v.strip():
                 entry.pop(key, None)
+            elif key not in entry or v != _as_text(entry[key]):
+                entry[key] = _from_text(v, entry.get(key))
         elif v is not None:
             entry[key] = v
     else:
