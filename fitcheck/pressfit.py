@@ -1,0 +1,871 @@
+"""Press and shrink fits of gears, pulleys, hubs and bearing rings on shafts (unit-aware layer).
+
+The question it answers: does the hub, pressed on the shaft, carry its torque
+and thrust at the loosest tolerance combination — at operating temperature and
+speed — without yielding at the tightest, and what does assembly take
+(press-in force, hub heating temperature)?
+
+>>> inp = PressFitInput.from_mapping({
+...     "name": "gear", "fit": "20 H7/s6", "length": "16 mm", "hub_outer_diameter": "40 mm",
+...     "shaft_material": "C45E", "hub_material": "C45E", "torque": "10 N*m"})
+>>> res = evaluate(inp)
+>>> res.ok, round(res.pressure_min, 1), round(res.torque_capacity_min / 1000, 1)
+(True, 22.7, 18.2)
+
+Method (see :data:`METHOD_NOTES`): Lamé thick-cylinder theory for shaft and hub
+in plane stress as used by DIN 7190-1:2017 for the elastic design, with the
+smoothing of roughness, the thermal change of the interference and the
+centrifugal loosening; the kernels are in :mod:`fitcheck.core.lame` and
+:mod:`fitcheck.core.pressfit`. Elastic-plastic design (DIN 7190-1, hub bore
+yielding) is not implemented: a joint whose hub or shaft would yield is
+reported as failing, with a :class:`~fitcheck.errors.MethodRangeWarning`.
+"""
+
+from __future__ import annotations
+
+import functools
+import math
+import warnings
+from collections.abc import Mapping
+from dataclasses import dataclass, fields
+
+import numpy as np
+
+from . import materials as _materials
+from . import tables
+from .checks import Check
+from .core import lame
+from .core import pressfit as _core
+from .errors import ErrorCollector, InputError, MethodRangeWarning, did_you_mean
+from .materials import Material
+from .units import number, temperature_c, to_core
+
+__all__ = ["KEYS", "METHOD_NOTES", "PressFitCase", "PressFitInput", "PressFitResult",
+           "default_friction", "evaluate"]
+
+RPM = 2.0 * math.pi / 60.0  # rad/s per rpm
+
+#: Keys of a ``[[pressfit]]`` table: key → meaning with unit and default.
+KEYS: dict[str, str] = {
+    "name": "name of the joint (text)",
+    "fit": "ISO 286 fit, e.g. '20 H7/s6'; gives diameter and interference limits "
+           "(or give interference_min/interference_max)",
+    "interference_min": "smallest diametral interference, e.g. '18 um' (with diameter; negative = clearance)",
+    "interference_max": "largest diametral interference, e.g. '48 um'",
+    "diameter": "joint diameter, e.g. '20 mm' (needed with explicit interference; else from the fit)",
+    "length": "length of the joint (hub width in contact), e.g. '16 mm'",
+    "shaft_bore": "bore of a hollow shaft, e.g. '8 mm' (default 0 = solid)",
+    "hub_outer_diameter": "outer diameter of the hub, e.g. '40 mm' (or module + teeth)",
+    "module": "gear module, e.g. '1.5 mm': equivalent hub diameter = root diameter m·(z − 2.5)",
+    "teeth": "number of teeth z (with module)",
+    "shaft_material": "material name of data/materials.csv, or an inline table (E, nu, alpha, Rp02, Rm, density)",
+    "hub_material": "material name or inline table, as shaft_material",
+    "rz_shaft": "mean roughness depth Rz of the shaft, e.g. '4 um' (default 4 um, ground)",
+    "rz_hub": "mean roughness depth Rz of the hub bore, e.g. '6.3 um' (default 6.3 um, reamed/fine-turned)",
+    "smoothing_factor": "share of Rz_shaft + Rz_hub lost to smoothing on joining (default 0.8, DIN 7190-1:2017)",
+    "mu_slip": "friction coefficient against slip (default by material pair and assembly, data/pressfit_friction.csv)",
+    "mu_press": "friction coefficient while pressing in (default as mu_slip)",
+    "assembly": "'press' (longitudinal press fit) or 'shrink' (hub heated / shaft cooled); default 'press'",
+    "torque": "torque to carry, e.g. '20 N*m' (default 0)",
+    "axial_force": "axial force to carry, e.g. '500 N' (default 0)",
+    "slip_safety": "required safety against slip (default 1.5, common practice)",
+    "speed": "operating speed, e.g. '3000 rpm' (default 0)",
+    "temperature_shaft": "operating temperature of the shaft, e.g. '60 degC' (default 20 degC)",
+    "temperature_hub": "operating temperature of the hub (default 20 degC)",
+    "temperature_assembly": "room temperature at assembly, at which the interference is given (default 20 degC)",
+    "temperature_shaft_cooled": "temperature of a cooled shaft at joining a shrink fit, e.g. '-78 degC' "
+                                "(default: room temperature, no cooling)",
+    "joining_clearance": "clearance wanted when joining a shrink fit (default 0.001·diameter, common practice)",
+    "yield_safety": "required safety of hub and shaft against yield, Rp0.2/σ_vM (default 1.2, common practice)",
+    "fracture_safety": "required safety of a brittle part (grey cast iron, plastic) against Rm with the "
+                       "largest principal stress (default 2.0, common practice)",
+    "press_force_limit": "force the press can give, e.g. '20 kN' (optional; checked for 'press' assembly)",
+}
+
+#: (step of the method in words, standard clause or book equation) for the report.
+METHOD_NOTES: list[tuple[str, str]] = [
+    ("Interference limits from the ISO 286 fit (or as given), at room temperature",
+     "ISO 286-1:2010 / ISO 286-2:2010"),
+    ("Loss by smoothing of the surfaces on joining: 0.8·(Rz_shaft + Rz_hub) (factor adjustable)",
+     "DIN 7190-1:2017, smoothing of the roughness"),
+    ("Change of interference at operating temperature: d·[α_s(T_s − T_0) − α_h(T_h − T_0)]",
+     "DIN 7190-1:2017, temperature influence"),
+    ("Loss of interference by rotation: free bore growth of the rotating hub minus the shaft's, "
+     "plane-stress discs", "Shigley, 10th ed., eq. (3-55); Timoshenko & Goodier § 32"),
+    ("Contact pressure from the effective interference, dissimilar materials, hollow or solid shaft",
+     "Shigley, 10th ed., eqs. (3-56), (3-57); DIN 7190-1:2017 (elastic design)"),
+    ("Transmissible torque T = p·π·d²·L·μ/2 and axial force F = p·π·d·L·μ at the loosest case; "
+     "safety against slip for the vector sum √((2T/d)² + F²)",
+     "Shigley, 10th ed., sec. 7-8; DIN 7190-1:2017"),
+    ("Radial and tangential stresses in hub and shaft (Lamé) plus rotation; von Mises (plane stress) "
+     "at the hub bore, the shaft surface and a hollow shaft's bore, at the tightest case",
+     "Shigley, 10th ed., eqs. (3-50), (3-58), (5-12)"),
+    ("Brittle parts (grey cast iron, plastics): largest principal stress against Rm",
+     "DIN 7190-1:2017 (brittle hubs) — from memory"),
+    ("Speed at which the contact pressure at the loosest case falls to zero",
+     "DIN 7190-1:2017, centrifugal loosening"),
+    ("Press-in force F_e = p_max·π·d·L·μ_press at room temperature",
+     "DIN 7190-1:2017, longitudinal press fits"),
+    ("Hub heating temperature T_0 + (δ_max + joining clearance − shaft cooling)/(α_h·d), "
+     "against the material's heating limit", "DIN 7190-1:2017, transverse press fits"),
+    ("Not implemented: elastic-plastic design (hub bore yielding), end effects at the hub faces, "
+     "fretting fatigue of the shaft", "DIN 7190-1:2017 (elastic-plastic range)"),
+]
+
+REF_SLIP = "DIN 7190-1:2017 (transmissible torque and axial force); Shigley, 10th ed., sec. 7-8"
+REF_HUB = "DIN 7190-1:2017 (elastic design, hub bore); von Mises, Shigley, 10th ed., eq. (5-12)"
+REF_SHAFT = "DIN 7190-1:2017 (elastic design, shaft); von Mises, Shigley, 10th ed., eq. (5-12)"
+REF_SPEED = "DIN 7190-1:2017 (centrifugal loosening); Shigley, 10th ed., eq. (3-55)"
+REF_HEAT = "DIN 7190-1:2017 (transverse press fits); heating limit of data/materials.csv"
+REF_PRESS = "DIN 7190-1:2017 (longitudinal press fits, press-in force)"
+
+DEFAULTS = {  # core units
+    "shaft_bore": 0.0,
+    "rz_shaft": 0.004,        # ground shaft, Rz 4 um — common practice
+    "rz_hub": 0.0063,         # reamed / fine-turned bore, Rz 6.3 um — common practice
+    "smoothing_factor": 0.8,  # DIN 7190-1:2017
+    "assembly": "press",
+    "torque": 0.0,
+    "axial_force": 0.0,
+    "slip_safety": 1.5,       # common practice
+    "speed": 0.0,
+    "temperature_shaft": 20.0,
+    "temperature_hub": 20.0,
+    "temperature_assembly": 20.0,
+    "yield_safety": 1.2,      # common practice
+    "fracture_safety": 2.0,   # common practice for brittle hubs
+}
+ASSEMBLIES = ("press", "shrink")
+_T_OP = (-100.0, 500.0)       # plausibility bounds of operating temperatures — common practice
+_T_ASM = (-200.0, 600.0)      # room temperature at assembly / cooled shaft — common practice
+
+
+# --------------------------------------------------------------------------- friction table
+
+FRICTION_TABLE = "pressfit_friction.csv"
+
+
+@functools.cache
+def _friction_rows() -> tuple[dict, ...]:
+    tables.require_columns(FRICTION_TABLE, ["shaft_group", "hub_group", "assembly", "mu_slip",
+                                            "mu_press", "source"])
+    rows = []
+    for i, r in enumerate(tables.read_rows(FRICTION_TABLE)):
+        mu_s, mu_p = float(r["mu_slip"]), float(r["mu_press"])
+        if not (0 < mu_s < 1 and 0 < mu_p < 1) or r["assembly"] not in ASSEMBLIES:
+            raise tables.TableError(f"{FRICTION_TABLE}, data row {i + 1}: bad friction value or assembly")
+        rows.append({**r, "mu_slip": mu_s, "mu_press": mu_p})
+    return tuple(rows)
+
+
+def default_friction(shaft_group: str, hub_group: str, assembly: str) -> tuple[float, float, str] | None:
+    """Tabulated (mu_slip, mu_press, source) for a material pair and assembly method, or None.
+
+    >>> default_friction("steel", "steel", "shrink")[:2]
+    (0.14, 0.1)
+    >>> default_friction("steel", "user", "press") is None
+    True
+    """
+    rows = _friction_rows()
+    for a, b in ((shaft_group, hub_group), (hub_group, shaft_group)):
+        for r in rows:
+            if r["assembly"] == assembly and r["shaft_group"] in (a, "*") and r["hub_group"] in (b, "*"):
+                return r["mu_slip"], r["mu_press"], r["source"]
+    return None
+
+
+# --------------------------------------------------------------------------- input
+
+_TO_UNIT = {"mm": 1.0, "um": 1e-3, "N*m": 1e3, "N": 1.0, "MPa": 1.0, "degC": 1.0, "1/K": 1.0,
+            "tonne/mm**3": 1.0, "rpm": RPM}
+_KIND = {"mm": "length", "um": "length", "N*m": "torque", "N": "force", "MPa": "stress",
+         "1/K": "expansion", "tonne/mm**3": "density", "rpm": "speed"}
+
+
+def _fmt(x: float, unit: str) -> str:
+    """A core-unit float as text in ``unit`` that reads back to exactly the same float.
+
+    The shortest number of significant digits that round-trips is used:
+    ``_fmt(0.0063, "um") -> '6.3 um'``.
+    """
+    x = float(x)
+    shown = x / _TO_UNIT[unit]
+    for n in (6, 9, 12, 15, 17):
+        text = f"{shown:.{n}g} {unit}"
+        back = temperature_c(text, "t") if unit == "degC" else to_core(text, _KIND[unit], "t")
+        if back == x:
+            return text
+    return f"{shown!r} {unit}"
+
+
+def _material_mapping(m: Material):
+    """A material as its table name (when it is the tabulated one) or a lossless inline table."""
+    try:
+        if _materials.get(m.name) == m:
+            return m.name
+    except InputError:
+        pass
+    out = {"name": m.name, "group": m.group, "E": _fmt(m.E, "MPa"), "nu": m.nu,
+           "alpha": _fmt(m.alpha, "1/K"), "Rp02": _fmt(m.Rp02, "MPa"), "Rm": _fmt(m.Rm, "MPa"),
+           "density": _fmt(m.density, "tonne/mm**3")}
+    if not math.isnan(m.max_heating_C):
+        out["max_heating"] = _fmt(m.max_heating_C, "degC")
+    for k in ("pG", "tauB"):
+        v = getattr(m, k)
+        if not math.isnan(v):
+            out[k] = _fmt(v, "MPa")
+    out["source"] = m.source
+    if m.note:
+        out["note"] = m.note
+    return out
+
+
+def _needs_unit(v, key: str, example: str) -> None:
+    if not isinstance(v, str) and not hasattr(v, "units"):
+        raise InputError(key, v, f"a length with its unit, e.g. {example}",
+                         "a bare number is ambiguous here (mm or um?)")
+
+
+@dataclass(frozen=True)
+class PressFitInput:
+    """Inputs of one press or shrink fit, parsed into core units (mm, N, N·mm, MPa, rad/s, °C).
+
+    Build it with :meth:`from_mapping` from a ``[[pressfit]]`` table (strings with units);
+    :meth:`to_mapping` gives the table back (``from_mapping(to_mapping()) == self``).
+    ``None`` means "not given": the diameter and interference come from ``fit``,
+    the hub diameter from ``module``/``teeth``, friction from the table, the
+    joining clearance from 0.001·d.
+    """
+
+    name: str = "pressfit"
+    fit: str | None = None
+    interference_min: float | None = None    # [mm]
+    interference_max: float | None = None    # [mm]
+    diameter: float | None = None            # [mm]
+    length: float = math.nan                 # [mm]
+    shaft_bore: float = 0.0                  # [mm]
+    hub_outer_diameter: float | None = None  # [mm]
+    module: float | None = None              # [mm]
+    teeth: int | None = None
+    shaft_material: Material | None = None
+    hub_material: Material | None = None
+    rz_shaft: float = DEFAULTS["rz_shaft"]
+    rz_hub: float = DEFAULTS["rz_hub"]
+    smoothing_factor: float = DEFAULTS["smoothing_factor"]
+    mu_slip: float | None = None
+    mu_press: float | None = None
+    assembly: str = "press"
+    torque: float = 0.0                      # [N·mm]
+    axial_force: float = 0.0                 # [N]
+    slip_safety: float = DEFAULTS["slip_safety"]
+    speed: float = 0.0                       # [rad/s]
+    temperature_shaft: float = 20.0          # [°C]
+    temperature_hub: float = 20.0            # [°C]
+    temperature_assembly: float = 20.0       # [°C]
+    temperature_shaft_cooled: float | None = None  # [°C]
+    joining_clearance: float | None = None   # [mm]
+    yield_safety: float = DEFAULTS["yield_safety"]
+    fracture_safety: float = DEFAULTS["fracture_safety"]
+    press_force_limit: float | None = None   # [N]
+
+    # ------------------------------------------------------------------ reading
+    @classmethod
+    def from_mapping(cls, mapping: Mapping, field: str = "pressfit") -> PressFitInput:  # noqa: C901
+        """Parse and check a ``[[pressfit]]`` table; every problem is reported at once.
+
+        Raises
+        ------
+        InputError or InputErrors
+            naming ``field.key``, the value and what is allowed.
+
+        Examples
+        --------
+        >>> PressFitInput.from_mapping({"fit": "20 H7/s6", "length": "16 mm",
+        ...     "hub_outer_diameter": "40 mm", "shaft_material": "C45E",
+        ...     "hub_material": "C45E"}).resolved_diameter()
+        20.0
+        >>> PressFitInput.from_mapping({"lenght": "16 mm"})  # doctest: +ELLIPSIS
+        Traceback (most recent call last):
+        ...
+        fitcheck.errors.InputErrors: 6 problems in the input:
+          - pressfit.lenght: got '16 mm'; allowed: a key of [[pressfit]]: ... (did you mean 'length'?)
+        ...
+        """
+        if not isinstance(mapping, Mapping):
+            raise InputError(field, mapping, "a table of press-fit keys (see fitcheck.pressfit.KEYS)")
+        errs = ErrorCollector()
+        v: dict = {}
+        for key, val in mapping.items():
+            if key not in KEYS:
+                errs.add(InputError(f"{field}.{key}", val, "a key of [[pressfit]]: " + ", ".join(KEYS),
+                                    did_you_mean(key, KEYS)))
+        g = mapping.get
+
+        def parse(key, fn):
+            if key not in mapping or mapping[key] is None:
+                return
+            with errs.field(field):
+                v[key] = fn(mapping[key], key)
+
+        def length(lo=0.0, lo_open=True, hi=None):
+            return lambda x, k: to_core(x, "length", k, lo=lo, lo_open=lo_open, hi=hi)
+
+        def small(x, k, lo=None):
+            _needs_unit(x, k, "'18 um'")
+            return to_core(x, "length", k, lo=lo)
+
+        if "name" in mapping:
+            v["name"] = str(g("name"))
+        parse("fit", lambda x, k: _parse_fit(x, k))
+        parse("interference_min", lambda x, k: small(x, k))
+        parse("interference_max", lambda x, k: small(x, k))
+        parse("diameter", length())
+        parse("length", length())
+        parse("shaft_bore", length(lo=0.0, lo_open=False))
+        parse("hub_outer_diameter", length())
+        parse("module", length())
+        parse("teeth", lambda x, k: _teeth(x, k))
+        parse("shaft_material", lambda x, k: _materials.from_mapping(x, k))
+        parse("hub_material", lambda x, k: _materials.from_mapping(x, k))
+        parse("rz_shaft", lambda x, k: small(x, k, lo=0.0))
+        parse("rz_hub", lambda x, k: small(x, k, lo=0.0))
+        parse("smoothing_factor", lambda x, k: number(x, k, lo=0.0, hi=2.0))
+        parse("mu_slip", lambda x, k: number(x, k, lo=0.0, hi=1.0, lo_open=True))
+        parse("mu_press", lambda x, k: number(x, k, lo=0.0, hi=1.0, lo_open=True))
+        parse("assembly", lambda x, k: _assembly(x, k))
+        parse("torque", lambda x, k: to_core(x, "torque", k, lo=0.0))
+        parse("axial_force", lambda x, k: to_core(x, "force", k, lo=0.0))
+        parse("slip_safety", lambda x, k: number(x, k, lo=1.0, hi=20.0))
+        parse("speed", lambda x, k: to_core(x, "speed", k, lo=0.0, hi=200_000 * RPM))
+        for key in ("temperature_shaft", "temperature_hub"):
+            parse(key, lambda x, k: temperature_c(x, k, lo=_T_OP[0], hi=_T_OP[1]))
+        for key in ("temperature_assembly", "temperature_shaft_cooled"):
+            parse(key, lambda x, k: temperature_c(x, k, lo=_T_ASM[0], hi=_T_ASM[1]))
+        parse("joining_clearance", lambda x, k: small(x, k, lo=0.0))
+        parse("yield_safety", lambda x, k: number(x, k, lo=1.0, hi=20.0))
+        parse("fracture_safety", lambda x, k: number(x, k, lo=1.0, hi=20.0))
+        parse("press_force_limit", lambda x, k: to_core(x, "force", k, lo=0.0, lo_open=True))
+
+        # ---- required keys and alternatives
+        has_fit = "fit" in mapping
+        has_int = "interference_min" in mapping or "interference_max" in mapping
+        if has_fit and has_int:
+            errs.add(InputError(f"{field}.fit", g("fit"), "either fit or interference_min/interference_max, "
+                                "not both"))
+        elif not has_fit and not has_int:
+            errs.add(InputError(f"{field}.fit", None, "a fit such as '20 H7/s6', or interference_min and "
+                                "interference_max with diameter"))
+        elif has_int:
+            for k in ("interference_min", "interference_max"):
+                if k not in mapping:
+                    errs.add(InputError(f"{field}.{k}", None, "a value (both interference limits are needed)"))
+            if "diameter" not in mapping:
+                errs.add(InputError(f"{field}.diameter", None, "the joint diameter (needed with explicit "
+                                    "interference), e.g. '20 mm'"))
+        for k in ("length", "shaft_material", "hub_material"):
+            if k not in mapping:
+                errs.add(InputError(f"{field}.{k}", None, "a value (required): " + KEYS[k]))
+        has_do = "hub_outer_diameter" in mapping
+        has_gear = "module" in mapping or "teeth" in mapping
+        if has_do and has_gear:
+            errs.add(InputError(f"{field}.hub_outer_diameter", g("hub_outer_diameter"),
+                                "either hub_outer_diameter or module + teeth, not both"))
+        elif not has_do and not has_gear:
+            errs.add(InputError(f"{field}.hub_outer_diameter", None,
+                                "the hub outer diameter, or module and teeth of a gear"))
+        elif has_gear:
+            for k in ("module", "teeth"):
+                if k not in mapping:
+                    errs.add(InputError(f"{field}.{k}", None, "a value (module and teeth go together)"))
+
+        # ---- cross checks on parsed values
+        fit_limits = v.pop("fit", None)
+        if fit_limits is not None:
+            v["fit"] = str(g("fit")).strip()
+            d_fit = fit_limits[0]
+            if "diameter" in v and abs(v["diameter"] - d_fit) > 1e-9 * d_fit:
+                errs.add(InputError(f"{field}.diameter", g("diameter"),
+                                    f"the fit's nominal size {d_fit:g} mm (or leave diameter out)"))
+        d = v.get("diameter", fit_limits[0] if fit_limits else None)
+        imin, imax = v.get("interference_min"), v.get("interference_max")
+        if imin is not None and imax is not None and imin > imax:
+            errs.add(InputError(f"{field}.interference_min", g("interference_min"),
+                                f"a value <= interference_max ({g('interference_max')!r})"))
+        if d is not None:
+            for k in ("interference_min", "interference_max"):
+                if k in v and abs(v[k]) > 0.02 * d:
+                    errs.add(InputError(f"{field}.{k}", g(k), f"an interference of at most 2 % of the "
+                                        f"diameter ({0.02 * d * 1000:g} um)", "units mixed up (mm for um)?"))
+            if "shaft_bore" in v and v["shaft_bore"] >= d:
+                errs.add(InputError(f"{field}.shaft_bore", g("shaft_bore"),
+                                    f"a bore smaller than the joint diameter ({d:g} mm)"))
+            do = v.get("hub_outer_diameter")
+            if do is not None and do <= d:
+                errs.add(InputError(f"{field}.hub_outer_diameter", g("hub_outer_diameter"),
+                                    f"a diameter larger than the joint diameter ({d:g} mm)"))
+            if "module" in v and "teeth" in v and v["module"] * (v["teeth"] - 2.5) <= d:
+                errs.add(InputError(f"{field}.teeth", g("teeth"),
+                                    f"a gear whose root diameter m·(z − 2.5) exceeds the bore {d:g} mm "
+                                    f"(now {v['module'] * (v['teeth'] - 2.5):g} mm)"))
+            jc = v.get("joining_clearance")
+            if jc is not None and jc > 0.02 * d:
+                errs.add(InputError(f"{field}.joining_clearance", g("joining_clearance"),
+                                    f"at most 2 % of the diameter ({0.02 * d:g} mm)"))
+        for k in ("rz_shaft", "rz_hub"):
+            if k in v and v[k] > 0.2:
+                errs.add(InputError(f"{field}.{k}", g(k), "a roughness depth of at most 200 um",
+                                    "units mixed up?"))
+        errs.raise_if_any()
+        return cls(**v)
+
+    def to_mapping(self) -> dict:
+        """The input as a ``[[pressfit]]`` table of strings with units (lossless)."""
+        out: dict = {"name": self.name}
+        if self.fit is not None:
+            out["fit"] = self.fit
+        else:
+            if self.interference_min is not None:
+                out["interference_min"] = _fmt(self.interference_min, "um")
+            if self.interference_max is not None:
+                out["interference_max"] = _fmt(self.interference_max, "um")
+        length_keys = ("diameter", "length", "shaft_bore", "hub_outer_diameter", "module")
+        for k in length_keys:
+            val = getattr(self, k)
+            if val is not None and not (isinstance(val, float) and math.isnan(val)):
+                out[k] = _fmt(val, "mm")
+        if self.teeth is not None:
+            out["teeth"] = self.teeth
+        for k in ("shaft_material", "hub_material"):
+            m = getattr(self, k)
+            if m is not None:
+                out[k] = _material_mapping(m)
+        out["rz_shaft"] = _fmt(self.rz_shaft, "um")
+        out["rz_hub"] = _fmt(self.rz_hub, "um")
+        out["smoothing_factor"] = self.smoothing_factor
+        for k in ("mu_slip", "mu_press"):
+            if getattr(self, k) is not None:
+                out[k] = getattr(self, k)
+        out["assembly"] = self.assembly
+        out["torque"] = _fmt(self.torque, "N*m")
+        out["axial_force"] = _fmt(self.axial_force, "N")
+        out["slip_safety"] = self.slip_safety
+        out["speed"] = _fmt(self.speed, "rpm")
+        for k in ("temperature_shaft", "temperature_hub", "temperature_assembly", "temperature_shaft_cooled"):
+            if getattr(self, k) is not None:
+                out[k] = _fmt(getattr(self, k), "degC")
+        if self.joining_clearance is not None:
+            out["joining_clearance"] = _fmt(self.joining_clearance, "um")
+        out["yield_safety"] = self.yield_safety
+        out["fracture_safety"] = self.fracture_safety
+        if self.press_force_limit is not None:
+            out["press_force_limit"] = _fmt(self.press_force_limit, "N")
+        return out
+
+    # ------------------------------------------------------------------ derived
+    def resolved_diameter(self) -> float:
+        """Joint diameter [mm]: as given, or the fit's nominal size."""
+        if self.diameter is not None:
+            return self.diameter
+        return self._limits()[0]
+
+    def _limits(self) -> tuple[float, float, float]:
+        """(nominal [mm], interference_min [mm], interference_max [mm])."""
+        if self.fit is not None:
+            return _parse_fit(self.fit, "fit")
+        if self.diameter is None or self.interference_min is None or self.interference_max is None:
+            raise InputError("pressfit", self.name, "diameter and both interference limits, or a fit")
+        return self.diameter, self.interference_min, self.interference_max
+
+    def resolved_hub_outer_diameter(self) -> tuple[float, str]:
+        """Hub outer diameter [mm] and the rule it came from."""
+        if self.hub_outer_diameter is not None:
+            return self.hub_outer_diameter, "given"
+        if self.module is None or self.teeth is None:
+            raise InputError("pressfit.hub_outer_diameter", None, "hub_outer_diameter or module + teeth")
+        return (self.module * (self.teeth - 2.5),
+                f"root diameter m·(z − 2.5) = {self.module:g}·({self.teeth} − 2.5) mm "
+                "(standard full-depth teeth, dedendum 1.25·m)")
+
+
+def _parse_fit(text, key):
+    if not isinstance(text, str):
+        raise InputError(key, text, "an ISO 286 fit such as '20 H7/s6'")
+    try:
+        return _fit_limits(text.strip())
+    except InputError as e:
+        raise InputError(key, e.value, e.allowed, e.hint) from None
+
+
+@functools.lru_cache(maxsize=256)
+def _fit_limits(text):
+    from . import fits  # imported here: the fits engine is a separate module
+
+    f = fits.fit(text)
+    if f.hole is None or f.shaft is None:
+        raise InputError("fit", text, "a hole and a shaft class, e.g. '20 H7/s6'")
+    return (float(f.nominal_mm), float(f.interference_min_um) / 1000.0,
+            float(f.interference_max_um) / 1000.0)
+
+
+def _teeth(x, key):
+    if isinstance(x, bool) or not isinstance(x, int | float | str):
+        raise InputError(key, x, "a whole number of teeth >= 6")
+    try:
+        z = float(x)
+    except ValueError:
+        raise InputError(key, x, "a whole number of teeth >= 6") from None
+    if not z.is_integer() or z < 6:
+        raise InputError(key, x, "a whole number of teeth >= 6")
+    return int(z)
+
+
+def _assembly(x, key):
+    s = str(x).strip().lower()
+    if s not in ASSEMBLIES:
+        raise InputError(key, x, "'press' (longitudinal) or 'shrink' (transverse)",
+                         did_you_mean(s, ASSEMBLIES))
+    return s
+
+
+# --------------------------------------------------------------------------- result
+
+@dataclass(frozen=True)
+class PressFitCase:
+    """One tolerance case (loosest or tightest) at one condition (operating or assembly).
+
+    Lengths [mm], stresses [MPa], torque [N·mm], force [N].
+    """
+
+    label: str
+    interference: float          # measured diametral interference at room temperature [mm]
+    effective_interference: float  # after smoothing, temperature and speed [mm]
+    pressure: float
+    torque_capacity: float
+    axial_capacity: float
+    hub_sigma_r_bore: float
+    hub_sigma_t_bore: float
+    hub_von_mises_bore: float
+    shaft_sigma_r_surface: float
+    shaft_sigma_t_surface: float
+    shaft_sigma_t_inner: float   # at a hollow shaft's bore, or at the centre of a solid one
+    shaft_von_mises_max: float
+
+    def to_dict(self) -> dict:
+        return {f.name: getattr(self, f.name) for f in fields(self)}
+
+
+@dataclass(frozen=True)
+class PressFitResult:
+    """Result of :func:`evaluate`: plain floats in core units plus the named checks.
+
+    Pressures and stresses [MPa], lengths and interferences [mm], torque [N·mm],
+    forces [N], temperatures [°C], speed [rad/s].
+    """
+
+    name: str
+    fit: str | None
+    diameter: float
+    length: float
+    shaft_bore: float
+    hub_outer_diameter: float
+    hub_outer_rule: str
+    interference_min: float
+    interference_max: float
+    roughness_loss: float
+    mu_slip: float
+    mu_press: float
+    friction_source: str
+    assembly: str
+    torque: float
+    axial_force: float
+    speed: float
+    temperature_shaft: float
+    temperature_hub: float
+    temperature_assembly: float
+    shaft_material: Material
+    hub_material: Material
+    loosest_operating: PressFitCase
+    tightest_operating: PressFitCase
+    loosest_assembly: PressFitCase
+    tightest_assembly: PressFitCase
+    pressure_min: float
+    pressure_max: float
+    torque_capacity_min: float
+    axial_capacity_min: float
+    slip_safety_min: float
+    hub_stress_max: float
+    hub_tresca_max: float
+    shaft_stress_max: float
+    shaft_tresca_max: float
+    hub_yield_safety: float
+    shaft_yield_safety: float
+    hub_outer_growth_max: float
+    shaft_bore_change_max: float
+    press_force_max: float
+    shrink_temperature_C: float
+    joining_clearance: float
+    loosening_speed: float
+    governing_tight_condition: str
+    checks: tuple[Check, ...]
+    warnings: tuple[str, ...] = ()
+
+    @property
+    def ok(self) -> bool:
+        return bool(self.checks) and all(c.passed for c in self.checks)
+
+    @property
+    def loosening_speed_rpm(self) -> float:
+        return self.loosening_speed / RPM
+
+    # ---- profiles for plots -------------------------------------------------------------
+    def wall_profile(self, n: int = 60) -> dict:
+        """Radial, tangential and von Mises stress through shaft and hub at the tightest case.
+
+        Returns a dict of arrays: ``r_shaft``, ``sr_shaft``, ``st_shaft``, ``vm_shaft``,
+        ``r_hub``, ``sr_hub``, ``st_hub``, ``vm_hub`` ([mm], [MPa]).
+        """
+        op = self.governing_tight_condition == "operating"
+        case = self.tightest_operating if op else self.tightest_assembly
+        w = self.speed if op else 0.0
+        d, di, Do = self.diameter, self.shaft_bore, self.hub_outer_diameter
+        rs = np.linspace(di / 2.0, d / 2.0, n)
+        rh = np.linspace(d / 2.0, Do / 2.0, n)
+        s, h = self.shaft_material, self.hub_material
+        srs, sts = lame.shaft_stresses(case.pressure, d, di, rs)
+        a, b = lame.rotating_disc_stresses(s.density, w, s.nu, di, d, rs)
+        srs, sts = srs + a, sts + b
+        srh, sth = lame.hub_stresses(case.pressure, d, Do, rh)
+        a, b = lame.rotating_disc_stresses(h.density, w, h.nu, d, Do, rh)
+        srh, sth = srh + a, sth + b
+        return {"r_shaft": rs, "sr_shaft": srs, "st_shaft": sts, "vm_shaft": lame.von_mises(srs, sts),
+                "r_hub": rh, "sr_hub": srh, "st_hub": sth, "vm_hub": lame.von_mises(srh, sth),
+                "condition": self.governing_tight_condition}
+
+    def torque_capacity_at(self, interference) -> np.ndarray:
+        """Torque capacity [N·mm] at operating condition for measured interferences [mm].
+
+        Linear in the interference above the loss by smoothing, temperature and speed; 0 below.
+        """
+        lo = self.loosest_operating
+        loss = lo.interference - lo.effective_interference
+        p_per_mm = _pressure_per_mm(self)
+        p = np.maximum((np.asarray(interference, dtype=float) - loss) * p_per_mm, 0.0)
+        return p * math.pi * self.diameter**2 * self.length * self.mu_slip / 2.0
+
+    def to_json(self) -> dict:
+        """Summary for ``--json`` and reports (units in the key names)."""
+        return {
+            "name": self.name,
+            "fit": self.fit,
+            "diameter_mm": self.diameter,
+            "length_mm": self.length,
+            "shaft_bore_mm": self.shaft_bore,
+            "hub_outer_diameter_mm": self.hub_outer_diameter,
+            "hub_outer_rule": self.hub_outer_rule,
+            "interference_min_um": self.interference_min * 1000.0,
+            "interference_max_um": self.interference_max * 1000.0,
+            "roughness_loss_um": self.roughness_loss * 1000.0,
+            "mu_slip": self.mu_slip,
+            "mu_press": self.mu_press,
+            "friction_source": self.friction_source,
+            "assembly": self.assembly,
+            "pressure_min_MPa": self.pressure_min,
+            "pressure_max_MPa": self.pressure_max,
+            "torque_capacity_min_Nm": self.torque_capacity_min / 1000.0,
+            "axial_capacity_min_N": self.axial_capacity_min,
+            "torque_required_Nm": self.torque / 1000.0,
+            "axial_force_required_N": self.axial_force,
+            "slip_safety_min": self.slip_safety_min,
+            "hub_stress_max_MPa": self.hub_stress_max,
+            "hub_tresca_max_MPa": self.hub_tresca_max,
+            "shaft_stress_max_MPa": self.shaft_stress_max,
+            "shaft_tresca_max_MPa": self.shaft_tresca_max,
+            "hub_yield_safety": self.hub_yield_safety,
+            "shaft_yield_safety": self.shaft_yield_safety,
+            "hub_outer_growth_max_um": self.hub_outer_growth_max * 1000.0,
+            "shaft_bore_change_max_um": self.shaft_bore_change_max * 1000.0,
+            "press_force_max_N": self.press_force_max,
+            "shrink_temperature_C": self.shrink_temperature_C,
+            "joining_clearance_um": self.joining_clearance * 1000.0,
+            "loosening_speed_rpm": self.loosening_speed_rpm,
+            "governing_tight_condition": self.governing_tight_condition,
+            "cases": {k: getattr(self, k).to_dict() for k in
+                      ("loosest_operating", "tightest_operating", "loosest_assembly", "tightest_assembly")},
+            "checks": [c.to_dict() for c in self.checks],
+            "warnings": list(self.warnings),
+            "ok": self.ok,
+        }
+
+
+def _pressure_per_mm(r: PressFitResult) -> float:
+    s, h = r.shaft_material, r.hub_material
+    k = lame.compliance_hub(r.diameter, r.hub_outer_diameter, h.E, h.nu) + \
+        lame.compliance_shaft(r.diameter, r.shaft_bore, s.E, s.nu)
+    return 1.0 / (r.diameter * k)
+
+
+def _f(x) -> float:
+    return float(np.asarray(x))
+
+
+def _case(label, delta, d, L, di, Do, s: Material, h: Material, mu, loss_rz, Ts, Th, T0, w) -> PressFitCase:
+    de = delta - loss_rz + lame.thermal_interference_change(d, s.alpha, h.alpha, Ts, Th, T0) \
+        - lame.centrifugal_interference_loss(w, d, di, Do, s.E, s.nu, s.density, h.E, h.nu, h.density)
+    p = lame.contact_pressure(de, d, di, Do, s.E, s.nu, h.E, h.nu)
+    hr, ht = lame.hub_stresses(p, d, Do, d / 2.0)
+    ht += lame.rotating_disc_stresses(h.density, w, h.nu, d, Do, d / 2.0)[1]
+    sr, st = lame.shaft_stresses(p, d, di, d / 2.0)
+    st += lame.rotating_disc_stresses(s.density, w, s.nu, di, d, d / 2.0)[1]
+    si = lame.shaft_stresses(p, d, di, di / 2.0)[1] + lame.rotating_disc_stresses(
+        s.density, w, s.nu, di, d, di / 2.0)[1]
+    vm_s = max(_f(lame.von_mises(sr, st)), abs(_f(si)))
+    fcap = p * math.pi * d * L * mu
+    return PressFitCase(label, delta, _f(de), _f(p), _f(fcap * d / 2.0), _f(fcap), _f(hr), _f(ht),
+                        _f(lame.von_mises(hr, ht)), _f(sr), _f(st), _f(si), vm_s)
+
+
+# --------------------------------------------------------------------------- evaluate
+
+def evaluate(inp: PressFitInput) -> PressFitResult:
+    """Evaluate one press or shrink fit: cases, capacities, stresses, assembly and checks.
+
+    Warns with :class:`~fitcheck.errors.MethodRangeWarning` where the elastic method
+    does not hold (hub bore or shaft yielding) or a material needs caution.
+    """
+    if not isinstance(inp, PressFitInput):
+        raise InputError("pressfit", type(inp).__name__, "a PressFitInput (use PressFitInput.from_mapping)")
+    if inp.shaft_material is None or inp.hub_material is None or math.isnan(inp.length):
+        raise InputError(f"pressfit[{inp.name}]", inp.name, "length, shaft_material and hub_material")
+    d, imin, imax = inp._limits()
+    if inp.diameter is not None:
+        d = inp.diameter
+    Do, do_rule = inp.resolved_hub_outer_diameter()
+    s, h = inp.shaft_material, inp.hub_material
+    label = f"pressfit[{inp.name}]"
+
+    # friction
+    tab = default_friction(s.group, h.group, inp.assembly)
+    if inp.mu_slip is None and tab is None:
+        raise InputError(f"{label}.mu_slip", None,
+                         f"a friction coefficient: {FRICTION_TABLE} has none for {s.group} "
+                         f"in {h.group} ({inp.assembly})")
+    mu_slip = inp.mu_slip if inp.mu_slip is not None else tab[0]
+    if inp.mu_press is not None:
+        mu_press = inp.mu_press
+    elif inp.mu_slip is None and tab is not None:
+        mu_press = tab[1]
+    else:
+        mu_press = mu_slip
+    src_parts = []
+    src_parts.append("mu_slip: given" if inp.mu_slip is not None else f"mu_slip: {tab[2]}")
+    if inp.mu_press is not None:
+        src_parts.append("mu_press: given")
+    elif inp.mu_slip is None:
+        src_parts.append(f"mu_press: {FRICTION_TABLE}")
+    else:
+        src_parts.append("mu_press: = mu_slip")
+    friction_source = "; ".join(src_parts)
+
+    brittle_s, brittle_h = not s.is_ductile, not h.is_ductile
+    shrink = inp.assembly == "shrink"
+    jc = inp.joining_clearance if inp.joining_clearance is not None else 1e-3 * d  # common practice
+    T0 = inp.temperature_assembly
+    T_cool = inp.temperature_shaft_cooled if inp.temperature_shaft_cooled is not None else T0
+    max_heat = h.max_heating_C if not math.isnan(h.max_heating_C) else np.inf
+    loss_rz = inp.smoothing_factor * (inp.rz_shaft + inp.rz_hub)
+    w = inp.speed
+
+    r = _core.evaluate(
+        interference_min=imin, interference_max=imax, d=d, L=inp.length, di=inp.shaft_bore, Do=Do,
+        Es=s.E, nus=s.nu, alphas=s.alpha, Rps=s.Rp02, rhos=s.density,
+        Eh=h.E, nuh=h.nu, alphah=h.alpha, Rph=h.Rp02, rhoh=h.density,
+        mu_slip=mu_slip, mu_press=mu_press, rz_shaft=inp.rz_shaft, rz_hub=inp.rz_hub,
+        smoothing=inp.smoothing_factor, torque=inp.torque, axial_force=inp.axial_force,
+        slip_safety=inp.slip_safety, omega=w, T_shaft=inp.temperature_shaft,
+        T_hub=inp.temperature_hub, T_assembly=T0, joining_clearance=jc,
+        yield_safety=inp.yield_safety, brittle_shaft=brittle_s, brittle_hub=brittle_h,
+        Rms=s.Rm, Rmh=h.Rm, fracture_safety=inp.fracture_safety, shrink=shrink,
+        max_heating=max_heat, T_shaft_cooled=T_cool,
+        press_force_limit=inp.press_force_limit if inp.press_force_limit is not None else np.inf)
+    r = {k: (_f(v) if np.asarray(v).dtype != bool else bool(v)) for k, v in r.items()}
+
+    args = (d, inp.length, inp.shaft_bore, Do, s, h, mu_slip, loss_rz)
+    Ts, Th = inp.temperature_shaft, inp.temperature_hub
+    cases = {
+        "loosest_operating": _case("loosest, operating", imin, *args, Ts, Th, T0, w),
+        "tightest_operating": _case("tightest, operating", imax, *args, Ts, Th, T0, w),
+        "loosest_assembly": _case("loosest, room temperature, standstill", imin, *args, T0, T0, T0, 0.0),
+        "tightest_assembly": _case("tightest, room temperature, standstill", imax, *args, T0, T0, T0, 0.0),
+    }
+    tight_op = cases["tightest_operating"].hub_von_mises_bore >= cases["tightest_assembly"].hub_von_mises_bore
+
+    # ---- checks
+    rpm = 1.0 / RPM
+    hub_req = inp.fracture_safety if brittle_h else inp.yield_safety
+    shaft_req = inp.fracture_safety if brittle_s else inp.yield_safety
+    hub_basis = "Rm / largest principal stress (brittle)" if brittle_h else "Rp0.2 / von Mises"
+    shaft_basis = "Rm / largest principal stress (brittle)" if brittle_s else "Rp0.2 / von Mises"
+    load_note = ("no torque or axial force given: only the contact pressure is checked"
+                 if inp.torque == 0 and inp.axial_force == 0 else
+                 f"demand √((2T/d)² + F²) with T = {inp.torque / 1000:g} N·m, F = {inp.axial_force:g} N")
+    checks = [
+        Check("slip at loosest fit", r["slip_safety_min"] if r["p_min"] > 0 else 0.0, inp.slip_safety, ">=",
+              "", REF_SLIP, load_note + ("" if r["p_min"] > 0 else "; no contact pressure (clearance)")),
+        Check("hub yield at tightest fit", r["hub_yield_safety"], hub_req, ">=", "", REF_HUB,
+              f"safety {hub_basis} at the hub bore"),
+        Check("shaft yield at tightest fit", r["shaft_yield_safety"], shaft_req, ">=", "", REF_SHAFT,
+              f"safety {shaft_basis}, shaft surface and bore/centre"),
+        Check("loosening speed", r["loosening_speed"] * rpm, w * rpm, ">=", "rpm", REF_SPEED,
+              "speed at which the loosest fit loses all contact pressure, against the operating speed"),
+    ]
+    warns: list[str] = []
+    if shrink:
+        if math.isfinite(max_heat):
+            checks.append(Check("hub heating temperature", r["shrink_temperature"], max_heat, "<=", "degC",
+                                REF_HEAT, f"heating limit of {h.name} (tempering / ageing / softening)"))
+        else:
+            warns.append(f"no heating limit known for {h.name}: the hub temperature "
+                         f"{r['shrink_temperature']:.0f} degC is not checked")
+    if inp.press_force_limit is not None and not shrink:
+        checks.append(Check("press-in force", r["press_force_max"], inp.press_force_limit, "<=", "N",
+                            REF_PRESS, "at the tightest fit, room temperature, with mu_press"))
+
+    # ---- method range and material cautions
+    if r["hub_yield_safety"] < 1.0:
+        warns.append(f"the hub bore exceeds its {'tensile strength' if brittle_h else 'yield strength'} at the "
+                     "tightest fit: the elastic Lamé result no longer holds; elastic-plastic design per "
+                     "DIN 7190-1:2017 is not implemented in fitcheck")
+    if r["shaft_yield_safety"] < 1.0:
+        warns.append("the shaft exceeds its yield strength at the tightest fit: the elastic result no longer "
+                     "holds (DIN 7190-1:2017 elastic-plastic range not implemented)")
+    for m, part in ((s, "shaft"), (h, "hub")):
+        if m.group == "plastic":
+            warns.append(f"{part} material {m.name} creeps: {m.note or 'long-term pressure is lower'}")
+        elif not m.is_ductile:
+            warns.append(f"{part} material {m.name} is brittle: checked with the largest principal stress "
+                         "against Rm")
+    if Do / d < 1.2:
+        warns.append(f"thin hub (Do/d = {Do / d:.2f}): the hub's own stiffness and the plane-stress model "
+                     "become uncertain")
+    for msg in warns:
+        warnings.warn(f"{label}: {msg}", MethodRangeWarning, stacklevel=2)
+
+    return PressFitResult(
+        name=inp.name, fit=inp.fit, diameter=d, length=inp.length, shaft_bore=inp.shaft_bore,
+        hub_outer_diameter=Do, hub_outer_rule=do_rule, interference_min=imin, interference_max=imax,
+        roughness_loss=loss_rz, mu_slip=mu_slip, mu_press=mu_press, friction_source=friction_source,
+        assembly=inp.assembly, torque=inp.torque, axial_force=inp.axial_force, speed=w,
+        temperature_shaft=Ts, temperature_hub=Th, temperature_assembly=T0,
+        shaft_material=s, hub_material=h, **cases,
+        pressure_min=r["p_min"], pressure_max=r["p_max"], torque_capacity_min=r["torque_capacity_min"],
+        axial_capacity_min=r["axial_capacity_min"],
+        slip_safety_min=r["slip_safety_min"] if r["p_min"] > 0 else 0.0,
+        hub_stress_max=r["hub_stress_max"], hub_tresca_max=r["hub_tresca_max"],
+        shaft_stress_max=r["shaft_stress_max"], shaft_tresca_max=r["shaft_tresca_max"],
+        hub_yield_safety=r["hub_yield_safety"], shaft_yield_safety=r["shaft_yield_safety"],
+        hub_outer_growth_max=r["hub_outer_growth_max"], shaft_bore_change_max=r["shaft_bore_change_max"] + 0.0,
+        press_force_max=r["press_force_max"], shrink_temperature_C=r["shrink_temperature"],
+        joining_clearance=jc, loosening_speed=r["loosening_speed"],
+        governing_tight_condition="operating" if tight_op else "assembly",
+        checks=tuple(checks), warnings=tuple(warns),
+    )
