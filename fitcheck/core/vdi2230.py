@@ -437,7 +437,7 @@ def frustum_stiffness(E, d, t, D, alpha_deg=30.0):
     return np.pi * E * d * ta / np.log((2 * t * ta + D - d) * (D + d) / ((2 * t * ta + D + d) * (D - d)))
 
 
-def member_stiffness_exponential(E, d, l, A=0.78952, B=0.62914):
+def member_stiffness_exponential(E, d, l_grip, A=0.78952, B=0.62914):
     """Member stiffness from the exponential fit of finite-element results (Wileman et al.).
 
     .. math:: k_m = E\\,d\\,A\\,\\exp(B\\,d/l)
@@ -446,7 +446,7 @@ def member_stiffness_exponential(E, d, l, A=0.78952, B=0.62914):
     ----------
     E : float or ndarray — Young's modulus of the members [MPa]
     d : float or ndarray — bolt diameter [mm]
-    l : float or ndarray — grip (clamp) length [mm]
+    l_grip : float or ndarray — grip (clamp) length [mm]
     A, B : float — material constants (Shigley Table 8-8; defaults: general expression)
 
     Returns
@@ -461,7 +461,7 @@ def member_stiffness_exponential(E, d, l, A=0.78952, B=0.62914):
     9.12
     """
     d = np.asarray(d, float)
-    return np.asarray(E, float) * d * A * np.exp(B * d / np.asarray(l, float))
+    return np.asarray(E, float) * d * A * np.exp(B * d / np.asarray(l_grip, float))
 
 
 def bolt_stiffness_shigley(A_d, A_t, E, l_d, l_t):
