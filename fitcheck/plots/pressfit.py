@@ -1,0 +1,80 @@
+"""Plots of a press-fit result: wall stresses and the torque-capacity band.
+
+Both take a :class:`fitcheck.pressfit.PressFitResult`, draw on ``ax`` (or a new
+figure) and return the Figure; they never call ``plt.show()``.
+"""
+
+from __future__ import annotations
+
+import numpy as np
+from matplotlib.figure import Figure
+
+
+def _axes(ax, size=(6.4, 4.0)):
+    if ax is None:
+        fig = Figure(figsize=size, layout="constrained")
+        return fig, fig.add_subplot()
+    return ax.figure, ax
+
+
+def plot_wall_stresses(result, ax=None) -> Figure:
+    """Radial, tangential and von Mises stress through shaft and hub walls at the tightest case.
+
+    The governing condition (room temperature at standstill, or operating with
+    temperature and centrifugal stresses) is the one with the larger stress at the hub bore.
+    """
+    fig, ax = _axes(ax)
+    prof = result.wall_profile()
+    for part, ls in (("shaft", "-"), ("hub", "-")):
+        r = prof[f"r_{part}"]
+        kw = {"label": None} if part == "hub" else {}
+        ax.plot(r, prof[f"sr_{part}"], ls, color="tab:blue", **({"label": "radial σr"} if part == "shaft" else kw))
+        ax.plot(r, prof[f"st_{part}"], ls, color="tab:orange",
+                **({"label": "tangential σt"} if part == "shaft" else kw))
+        ax.plot(r, prof[f"vm_{part}"], "--", color="tab:red",
+                **({"label": "von Mises σv"} if part == "shaft" else kw))
+    ax.axvline(result.diameter / 2.0, color="0.4", lw=0.8)
+    ax.axhline(0.0, color="0.6", lw=0.6)
+    h, s = result.hub_material, result.shaft_material
+    ax.axhline(h.Rp02, color="tab:red", lw=0.6, ls=":", label=f"Rp0.2 hub ({h.name})")
+    if s.Rp02 != h.Rp02:
+        ax.axhline(s.Rp02, color="tab:purple", lw=0.6, ls=":", label=f"Rp0.2 shaft ({s.name})")
+    ax.set_xlim(0.0, result.hub_outer_diameter / 2.0)
+    ax.set_xlabel("radius r [mm]  (shaft | hub)")
+    ax.set_ylabel("stress [MPa]")
+    cond = "operating" if prof["condition"] == "operating" else "room temperature, standstill"
+    ax.set_title(f"{result.name}: wall stresses at the tightest fit ({cond})", fontsize=10)
+    ax.legend(fontsize=8, loc="best")
+    ax.grid(True, lw=0.3)
+    return fig
+
+
+def plot_capacity_band(result, ax=None) -> Figure:
+    """Torque capacity across the interference band (loosest → tightest) at operating condition.
+
+    The line marks the required torque × slip safety; where the band lies
+    below it the joint can slip.
+    """
+    fig, ax = _axes(ax)
+    lo, hi = result.interference_min, result.interference_max
+    pad = 0.05 * max(hi - lo, 1e-6)
+    x = np.linspace(lo - pad, hi + pad, 200)
+    t = result.torque_capacity_at(x) / 1000.0
+    ax.plot(x * 1000.0, t, color="tab:blue", label="torque capacity (operating)")
+    band = (x >= lo) & (x <= hi)
+    ax.fill_between(x[band] * 1000.0, 0.0, t[band], color="tab:blue", alpha=0.15,
+                    label="tolerance band")
+    slip = next((c for c in result.checks if c.name == "slip at loosest fit"), None)
+    s_req = slip.limit if slip is not None else 1.0
+    need = result.torque / 1000.0 * s_req
+    if result.axial_force > 0:
+        # equivalent torque of the combined demand √((2T/d)² + F²)
+        need = np.hypot(2.0 * result.torque / result.diameter, result.axial_force) * result.diameter / 2e3 * s_req
+    ax.axhline(need, color="tab:red", ls="--", label=f"required × slip safety {s_req:g}")
+    ax.set_xlabel("measured diametral interference [µm]")
+    ax.set_ylabel("torque [N·m]")
+    ax.set_title(f"{result.name}: torque capacity across the interference band", fontsize=10)
+    ax.legend(fontsize=8, loc="upper left")
+    ax.grid(True, lw=0.3)
+    ax.set_ylim(bottom=0.0)
+    return fig
