@@ -1,0 +1,95 @@
+"""``fitcheck screws case.toml`` — housing-screw joints of a case file after VDI 2230 Part 1:2015."""
+
+from __future__ import annotations
+
+import math
+import sys
+from collections.abc import Mapping
+
+from .. import CAUTION
+from ..errors import ErrorCollector, InputError, InputErrors
+from ..screws import KEYS, ScrewJointInput, evaluate
+from ..tomlread import read_toml
+from . import EXIT_FAILED_CHECK, EXIT_OK, print_json, print_table
+
+COMMAND = "screws"
+HELP = "check the [[screws]] joints of a case file (preload, torque, clamp load, pressure, engagement)"
+
+_CONDITION_KEYS = ("temperature_min", "temperature_max", "temperature_assembly")
+
+
+def add_arguments(p) -> None:
+    p.add_argument("case", help="TOML case file with one or more [[screws]] tables")
+    p.add_argument("--json", action="store_true", help="print one JSON object")
+
+
+def load_inputs(data: Mapping, source: str = "case file") -> list[ScrewJointInput]:
+    """The :class:`ScrewJointInput` of every ``[[screws]]`` table, ``[conditions]`` temperatures as defaults."""
+    tabs = data.get("screws")
+    if tabs is None:
+        raise InputError(source, "no [[screws]] table", "a case file with at least one [[screws]] table")
+    if isinstance(tabs, Mapping):
+        tabs = [tabs]
+    if not isinstance(tabs, list):
+        raise InputError("screws", tabs, "an array of tables [[screws]]")
+    cond = data.get("conditions", {})
+    if not isinstance(cond, Mapping):
+        raise InputError("conditions", cond, "a [conditions] table")
+    defaults = {k: cond[k] for k in _CONDITION_KEYS if k in cond}
+    errs = ErrorCollector()
+    out = []
+    for i, t in enumerate(tabs):
+        label = f"screws[{t.get('name', i + 1) if isinstance(t, Mapping) else i + 1}]"
+        if not isinstance(t, Mapping):
+            errs.add(InputError(label, t, "a table of keys: " + ", ".join(KEYS)))
+            continue
+        try:
+            out.append(ScrewJointInput.from_mapping({**defaults, **t}, label))
+        except (InputError, InputErrors) as exc:
+            errs.add(exc)
+    errs.raise_if_any()
+    return out
+
+
+def _f(v: float, digits: int = 4) -> str:
+    return "–" if v is None or (isinstance(v, float) and not math.isfinite(v)) else f"{v:.{digits}g}"
+
+
+def run(args) -> int:
+    data = read_toml(args.case)
+    inputs = load_inputs(data, args.case)
+    results = [evaluate(inp) for inp in inputs]
+    ok = all(r.ok for r in results)
+    if args.json:
+        print_json({"joints": [r.to_dict() for r in results], "ok": ok, "caution": CAUTION})
+        return EXIT_OK if ok else EXIT_FAILED_CHECK
+    out = sys.stdout
+    for r in results:
+        out.write(f"{r.name}: {r.thread} {r.property_class}  (VDI 2230 Part 1:2015)\n")
+        print_table(["quantity", "value", "unit"], [
+            ["stress area As", _f(r.As), "mm²"],
+            ["screw / clamp stiffness", f"{_f(r.screw_stiffness / 1000)} / {_f(r.clamp_stiffness / 1000)}", "kN/mm"],
+            ["load factor Φ (n)", f"{r.load_factor:.3f} ({r.load_introduction:g})", ""],
+            ["axial / transverse load per screw", f"{_f(r.F_A)} / {_f(r.F_Q)}", "N"],
+            ["embedding loss FZ", _f(r.F_Z), "N"],
+            ["thermal change cold / warm", f"{_f(r.dF_th_cold)} / {_f(r.dF_th_warm)}", "N"],
+            ["FM,min required / αA·FM,min", f"{_f(r.F_M_min)} / {_f(r.F_M_max)}", "N"],
+            ["FM,zul (permissible, ν)", _f(r.F_M_zul), "N"],
+            ["tightening torque MA (at μmin)", _f(r.tightening_torque / 1000, 3), "N·m"],
+            ["preload at μmax with MA", _f(r.preload_at_mu_max), "N"],
+            ["Shigley T = 0.2·F·d (cross-check)", _f(r.torque_shigley / 1000, 3), "N·m"],
+            ["residual clamp load FKR,min", _f(r.F_KR_min), "N"],
+            ["σred,B / yield safety", f"{_f(r.sigma_red_B)} / {r.yield_safety:.2f}", "MPa / –"],
+            ["surface pressure / pG", f"{_f(r.surface_pressure)} / {_f(r.p_G)}", "MPa"],
+            ["engagement / minimum", f"{_f(r.engagement)} / {_f(r.engagement_min)}", "mm"],
+            ["fatigue σa / σAS", f"{_f(r.sigma_a)} / {_f(r.sigma_AS)}", "MPa"],
+        ])
+        out.write("\n")
+        print_table(["check", "value", "limit", "unit", "verdict", "reference"], [
+            [c.name, _f(c.value), f"{c.sense} {_f(c.limit)}", c.unit, "pass" if c.passed else "FAIL",
+             c.reference] for c in r.checks])
+        for w in r.warnings:
+            out.write(f"warning: {w}\n")
+        out.write(f"=> {'all checks pass' if r.ok else 'A CHECK FAILS'}\n\n")
+    out.write(f"{CAUTION}\n")
+    return EXIT_OK if ok else EXIT_FAILED_CHECK
