@@ -139,8 +139,10 @@ def draw_inputs(table: str, prefix: str, name: str, groups: Sequence[tuple[str, 
     for i, (title, fs) in enumerate(groups):
         bad = any(f.key in by_key for f in fs)
         with st.expander(title + ("  ✋" if bad else ""), expanded=(i < expanded) or bad):
-            for f in fs:
-                _draw(prefix, name, f, keys.get(f.key, ""), by_key.get(f.key))
+            cols = st.columns(2)
+            for j, f in enumerate(fs):
+                with cols[j % 2]:
+                    _draw(prefix, name, f, keys.get(f.key, ""), by_key.get(f.key))
     for e in rest:
         st.error(widgets.error_text(e), icon="✋")
 

@@ -54,6 +54,26 @@ _INPUT = [
 _SMALL = {"um", "micrometer", "micrometre", "micron", "µm", "uin", "microinch"}
 
 
+def num(x: float, digits: int = 4) -> str:
+    """A number with ``digits`` significant digits, in plain notation where that stays readable.
+
+    >>> num(15742.3), num(0.000315, 3), num(-8.268), num(2.0), num(1.5e9)
+    ('15740', '0.000315', '-8.268', '2', '1.5e+09')
+    """
+    x = float(x)
+    if x == 0 or not math.isfinite(x):
+        return f"{x:g}"
+    e = math.floor(math.log10(abs(x)))
+    if e >= 7 or e < -5:
+        return f"{x:.{digits}g}"
+    r = round(x, digits - 1 - e)
+    dec = max(digits - 1 - e, 0)
+    text = f"{r:.{dec}f}"
+    if "." in text:
+        text = text.rstrip("0").rstrip(".")
+    return "0" if text in ("-0", "") else text
+
+
 def unit_for(kind: str, system: str) -> str:
     """The display unit (pint spelling) of a kind of quantity in a system."""
     return DISPLAY[kind][system if system in SYSTEMS else "SI"]
@@ -79,7 +99,7 @@ def show(value: float | None, kind: str, system: str, digits: int | None = None)
     else:
         mag = float(quantity(float(value), kind, unit).magnitude)
     d = digits if digits is not None else digits_for(unit)
-    return f"{mag:.{d}g} {symbol(unit)}".strip()
+    return f"{num(mag, d)} {symbol(unit)}".strip()
 
 
 def magnitude(value: float, kind: str, system: str) -> float:
@@ -97,7 +117,7 @@ def show_in(value: float, unit: str, system: str, digits: int | None = None) -> 
     target = _target_unit(unit, system)
     mag = float(value) if target == unit else float(Q_(float(value), unit).to(target).magnitude)
     d = digits if digits is not None else digits_for(target)
-    return f"{mag:.{d}g} {symbol(target)}".strip()
+    return f"{num(mag, d)} {symbol(target)}".strip()
 
 
 def _target_unit(unit: str, system: str) -> str:
@@ -107,6 +127,8 @@ def _target_unit(unit: str, system: str) -> str:
         dim = ureg.Quantity(1.0, unit).dimensionality
     except Exception:  # a unit pint does not know: show as given
         return unit
+    if unit in ("degC", "degF"):
+        return "degC" if system == "SI" else "degF"
     if dim == ureg.Quantity(1.0, "um").dimensionality and unit in _SMALL:
         return "um" if system == "SI" else "in"
     for d, si, inch in _INPUT:
@@ -164,4 +186,14 @@ def show_range(pair, kind: str, system: str, digits: int | None = None) -> str:
     unit = unit_for(kind, system)
     d = digits if digits is not None else digits_for(unit)
     a, b = magnitude(lo, kind, system), magnitude(hi, kind, system)
-    return f"{a:.{d}g} … {b:.{d}g} {symbol(unit)}".strip()
+    return f"{num(a, d)} … {num(b, d)} {symbol(unit)}".strip()
+
+
+def show_small(value_mm: float, system: str, digits: int | None = None) -> str:
+    """A small length held in mm (an interference) shown in µm (SI) or inch."""
+    if value_mm is None or not math.isfinite(float(value_mm)):
+        return "—"
+    target = "um" if system == "SI" else "in"
+    mag = float(Q_(float(value_mm), "mm").to(target).magnitude)
+    d = digits if digits is not None else digits_for(target)
+    return f"{num(mag, d)} {symbol(target)}"

@@ -1,0 +1,184 @@
+"""Page "Press fit": does the hub carry its torque at the loosest fit and stay elastic at the tightest?
+
+Every input of ``fitcheck.pressfit`` (``KEYS``) can be set; the fit classes can be
+picked from those ISO 286 defines at the joint diameter. Shows the loosest and
+tightest cases, the stresses through the wall, the capacity across the tolerance
+band against the required torque, and every check with its margin.
+"""
+
+from __future__ import annotations
+
+import pandas as pd
+import streamlit as st
+
+from fitcheck import fits, pressfit
+from fitcheck.errors import InputError
+from fitcheck.ui import app, joints, state, unitsys, widgets
+from fitcheck.ui.joints import Field
+
+TABLE, PREFIX = "pressfit", "pf"
+
+
+def fields() -> list[tuple[str, list[Field]]]:
+    return joints.grouped(pressfit.KEYS, [
+        ("Fit and size", [Field("fit", "Fit (ISO 286)"), "diameter", "interference_min",
+                          "interference_max", "length", "shaft_bore", "hub_outer_diameter",
+                          "module", "teeth"]),
+        ("Load and operation", ["torque", "axial_force", "speed", "temperature_shaft",
+                                "temperature_hub", "temperature_assembly"]),
+        ("Materials and surfaces", [Field("shaft_material", material=True),
+                                    Field("hub_material", material=True), "rz_shaft", "rz_hub",
+                                    "smoothing_factor", "mu_slip", "mu_press"]),
+        ("Assembly", [Field("assembly", "Assembly", ("press", "shrink")),
+                      "press_force_limit", "temperature_shaft_cooled", "joining_clearance"]),
+        ("Required safeties", ["slip_safety", "yield_safety", "fracture_safety"]),
+    ])
+
+
+@st.cache_data(show_spinner=False, max_entries=256)
+def _parse_fit(text: str):
+    d = fits.parse(text)
+    return d, fits.valid_classes(d.nominal_mm, "hole"), fits.valid_classes(d.nominal_mm, "shaft")
+
+
+def _set_class(name: str, size_text: str) -> None:
+    ss = st.session_state
+    hole = ss.get(f"{PREFIX}.{name}.fit.hole")
+    shaft = ss.get(f"{PREFIX}.{name}.fit.shaft")
+    text = f"{size_text} {hole}/{shaft}"
+    ss[joints.wkey(PREFIX, name, "fit")] = text
+    entry = state.joint(TABLE, name)
+    if entry is not None:
+        entry["fit"] = text
+
+
+def _class_pickers(name: str, entry: dict) -> None:
+    """Hole and shaft class of the fit, offered from the classes valid at its diameter."""
+    text = entry.get("fit")
+    if not isinstance(text, str):
+        return
+    try:
+        d, holes, shafts = _parse_fit(text)
+    except InputError:
+        return
+    if not (d.hole and d.shaft):
+        return
+    size_text = text.strip().split(d.hole)[0].strip()
+    ss = st.session_state
+    kh, ks = f"{PREFIX}.{name}.fit.hole", f"{PREFIX}.{name}.fit.shaft"
+    ss[kh], ss[ks] = d.hole, d.shaft
+    c = st.columns(2)
+    c[0].selectbox("Hole class", holes, key=kh, on_change=_set_class, args=(name, size_text),
+                   help="Classes ISO 286 defines at this diameter")
+    c[1].selectbox("Shaft class", shafts, key=ks, on_change=_set_class, args=(name, size_text),
+                   help="Classes ISO 286 defines at this diameter")
+
+
+def render() -> None:
+    app.heading("Press fit", "Torque and thrust carried at the loosest fit, stresses at the "
+                "tightest, and what assembly takes — for a hub pressed or shrunk on a shaft.")
+    name = joints.pick_joint(TABLE, PREFIX, "press fit")
+    if name is None:
+        return
+    groups = fields()
+    entry = joints.bind(TABLE, PREFIX, name, [f for _, fs in groups for f in fs])
+    jr, errors, msgs = joints.evaluate(TABLE, name)
+    system = state.system()
+    left, right = st.columns([2, 3], gap="large")
+    with left:
+        _class_pickers(name, entry)
+        joints.draw_inputs(TABLE, PREFIX, name, groups, pressfit.KEYS, errors, expanded=2)
+    if jr is None:
+        with right:
+            st.info("Correct the inputs marked ✋ to see the results.")
+        return
+    r = jr.result
+    with right:
+        _summary(r, system)
+        widgets.warnings_box(msgs)
+    _details(r, system)
+
+
+def _summary(r: pressfit.PressFitResult, system: str) -> None:
+    widgets.verdict_banner(r.ok, min(r.checks, key=lambda c: c.margin) if r.checks else None,
+                           system)
+    st.subheader(f"{r.name or 'Joint'}: {r.fit or 'given interference'}, "
+                 f"Ø {unitsys.show(r.diameter, 'length', system)} × "
+                 f"{unitsys.show(r.length, 'length', system)}")
+    c = st.columns(3)
+    c[0].metric("Torque capacity, loosest", unitsys.show(r.torque_capacity_min, "torque", system),
+                help="transmissible torque at the loosest fit in operation")
+    c[1].metric("Torque required", unitsys.show(r.torque, "torque", system))
+    c[2].metric("Slip safety, loosest", unitsys.num(r.slip_safety_min, 3),
+                help="capacity over the load (torque and thrust combined)")
+    c = st.columns(3)
+    c[0].metric("Pressure, loosest", unitsys.show(r.pressure_min, "stress", system),
+                help="contact pressure at the loosest fit in operation")
+    c[1].metric("Pressure, tightest", unitsys.show(r.pressure_max, "stress", system),
+                help="contact pressure at the tightest fit")
+    c[2].metric("Hub yield safety", unitsys.num(r.hub_yield_safety, 3),
+                help="Rp0.2 over the largest von Mises stress at the hub bore, tightest fit")
+    c = st.columns(3)
+    if r.assembly == "shrink":
+        c[0].metric("Hub heating temperature", unitsys.show_in(r.shrink_temperature_C, "degC",
+                                                                system))
+    else:
+        c[0].metric("Press-in force, largest", unitsys.show(r.press_force_max, "force", system))
+    c[1].metric("Shaft yield safety", unitsys.num(r.shaft_yield_safety, 3))
+    c[2].metric("Loosening speed", unitsys.show(r.loosening_speed, "speed", system, digits=3),
+                help="speed at which the loosest fit loses all its pressure")
+    try:
+        from fitcheck.plots.pressfit import plot_capacity_band
+    except ImportError:
+        return
+    widgets.figure(plot_capacity_band(r))
+
+
+def _details(r: pressfit.PressFitResult, system: str) -> None:
+    st.subheader("Checks")
+    widgets.show_checks(r.checks, system, key=f"{PREFIX}.checks")
+    left, right = st.columns([1, 1], gap="large")
+    with left:
+        st.subheader("Loosest and tightest")
+        cases = [r.loosest_operating, r.tightest_operating, r.loosest_assembly, r.tightest_assembly]
+        heads = ["loosest, operating", "tightest, operating", "loosest, assembly",
+                 "tightest, assembly"]
+        rows = [
+            ("interference, measured", "interference", "small_length_mm"),
+            ("interference, effective", "effective_interference", "small_length_mm"),
+            ("contact pressure", "pressure", "stress"),
+            ("torque capacity", "torque_capacity", "torque"),
+            ("axial capacity", "axial_capacity", "force"),
+            ("hub bore, tangential stress", "hub_sigma_t_bore", "stress"),
+            ("hub bore, von Mises", "hub_von_mises_bore", "stress"),
+            ("shaft, largest von Mises", "shaft_von_mises_max", "stress"),
+        ]
+        table = {"quantity": [q for q, _, _ in rows]}
+        for h, case in zip(heads, cases, strict=True):
+            table[h] = [_show_case(getattr(case, attr), kind, system) for _, attr, kind in rows]
+        st.dataframe(pd.DataFrame(table), hide_index=True, width="stretch", key=f"{PREFIX}.cases")
+        widgets.kv_table([
+            ("friction μ slip / press", f"{r.mu_slip:g} / {r.mu_press:g} ({r.friction_source})"),
+            ("hub outer diameter used", f"{unitsys.show(r.hub_outer_diameter, 'length', system)}"
+                                        f" ({r.hub_outer_rule})"),
+            ("loosening speed", unitsys.show(r.loosening_speed, "speed", system)),
+            ("operating speed", unitsys.show(r.speed, "speed", system)),
+            ("governing tight condition", r.governing_tight_condition),
+        ], key=f"{PREFIX}.more")
+    with right:
+        try:
+            from fitcheck.plots.pressfit import plot_wall_stresses
+        except ImportError:
+            return
+        st.subheader("Stress through the wall")
+        widgets.figure(plot_wall_stresses(r))
+
+
+def _show_case(value: float, kind: str, system: str) -> str:
+    if kind == "small_length_mm":  # interferences are in mm in the press-fit results
+        return unitsys.show_small(value, system)
+    return unitsys.show(value, kind, system)
+
+
+if __name__ == "__main__":
+    render()
