@@ -192,6 +192,8 @@ CONDITION_KEYS: dict[str, tuple[str, float, float]] = {
     "temperature_shaft": ("temperature", -100.0, 500.0),    # common practice
     "temperature_hub": ("temperature", -100.0, 500.0),      # common practice
     "temperature_housing": ("temperature", -100.0, 500.0),  # common practice
+    "temperature_inner": ("temperature", -100.0, 500.0),    # common practice (bearing inner ring)
+    "temperature_outer": ("temperature", -100.0, 500.0),    # common practice (bearing outer ring)
     "temperature_assembly": ("temperature", -200.0, 600.0),  # common practice (LN2 cooling … heating)
     "speed": ("speed", 0.0, 200_000 * 2 * math.pi / 60),    # common practice: up to 200 000 rpm
 }
@@ -458,16 +460,41 @@ def to_document(case: DesignCase) -> dict:
     if case.conditions:
         doc["conditions"] = dict(case.conditions)
     for eng, name, inp in case.joints():
-        mapping = inp.to_mapping()
-        table = {"name": name}
-        for k, v in mapping.items():
-            if k == "name" or v is None:
-                continue
-            if k in case.conditions and case.conditions[k] == v:
-                continue  # inherited from [conditions] on reading
-            table[k] = v
-        doc.setdefault(eng.table, []).append(table)
+        full = {"name": name}
+        full.update((k, v) for k, v in inp.to_mapping().items() if k != "name" and v is not None)
+        short = {k: v for k, v in full.items()
+                 if not (k in case.conditions and _same_value(case.conditions[k], v))}
+        if short != full and not _reads_back(eng, name, inp, short, case.conditions):
+            short = full
+        doc.setdefault(eng.table, []).append(short)
     return doc
+
+
+def _same_value(a, b) -> bool:
+    """Equal as written, or the same quantity in other words ("55 degC" and "55.0 degC")."""
+    if a == b:
+        return True
+    if not (isinstance(a, str) and isinstance(b, str)):
+        return False
+    from .units import Q_
+
+    try:
+        qa, qb = Q_(a), Q_(b)
+        return qa.dimensionality == qb.dimensionality and math.isclose(
+            float(qa.to(qb.units).magnitude), float(qb.magnitude), rel_tol=1e-12, abs_tol=1e-12)
+    except Exception:  # pint raises several unrelated types for text it cannot read
+        return False
+
+
+def _reads_back(eng: Engine, name: str, inp, table: Mapping, conditions: Mapping) -> bool:
+    """True when a joint table without its inherited keys reads back to the same input."""
+    keys = eng.keys()
+    mapping = {k: v for k, v in table.items() if k != "name" or "name" in eng.load().KEYS}
+    inherited = {k: v for k, v in conditions.items() if k in keys and k not in table}
+    try:
+        return eng.input_type().from_mapping({**inherited, **mapping}, joint_label(eng.table, name)) == inp
+    except (InputError, InputErrors):
+        return False
 
 
 def dumps(case: DesignCase) -> str:

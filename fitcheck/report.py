@@ -374,8 +374,8 @@ class _PdfPages:
     def _text(self, x: float, s: str, style: str, **kw):
         self.fig.text(x / _A4[0], self.y / _A4[1], s, fontsize=_SIZE[style], va="top", **kw)
 
-    def wrap(self, s: str, width_in: float, style: str = "body") -> list[str]:
-        chars = max(8, int(width_in * 72 / (_SIZE[style] * _CHAR_W)))
+    def wrap(self, s: str, width_in: float, style: str = "body", bold: bool = False) -> list[str]:
+        chars = max(8, int(width_in * 72 / (_SIZE[style] * _CHAR_W * (1.12 if bold else 1.0))))
         lines = []
         for para in str(s).split("\n"):
             lines.extend(textwrap.wrap(para, chars, break_on_hyphens=False) or [""])
@@ -392,14 +392,14 @@ class _PdfPages:
 
     def para(self, s: str, style: str = "body", box: bool = False, **kw):
         width = _A4[0] - 2 * _MARGIN - (0.2 if box else 0)
-        lines = self.wrap(s, width, style)
+        lines = self.wrap(s, width, style, bold=kw.get("weight") == "bold")
         for ln in lines:
             self._need(_LINE[style])
             self._text(_MARGIN + (0.1 if box else 0), ln, style, **kw)
             self.y -= _LINE[style]
         self.y -= _LINE[style] * 0.4
 
-    def table(self, headers: list[str], rows: list[list[str]], widths: list[float],
+    def table(self, headers: list[str] | None, rows: list[list[str]], widths: list[float],
               style: str = "body", colors: list[list[str | None]] | None = None):
         """A ruled table; ``widths`` are fractions of the text width."""
         total = _A4[0] - 2 * _MARGIN
@@ -423,12 +423,14 @@ class _PdfPages:
 
         self._need(lh * 3)
         self.fig.add_artist(_hline(self.y, 0.5))
-        draw_row(headers, bold=True)
+        if headers:
+            draw_row(headers, bold=True)
         for i, r in enumerate(rows):
             if self.y - lh * 2 < _MARGIN:
                 self._new_page()
                 self.fig.add_artist(_hline(self.y, 0.5))
-                draw_row(headers, bold=True)
+                if headers:
+                    draw_row(headers, bold=True)
             draw_row(r, row_colors=colors[i] if colors else None)
         self.y -= lh * 0.6
 
@@ -479,7 +481,7 @@ def to_pdf(result: CaseResult | DesignCase | Report, path: str | os.PathLike | i
         info["Creator"] = f"fitcheck {rep.version}"
         w = _PdfPages(pdf, footer)
         w.heading(f"Calculation report: {doc_title}", "h1")
-        w.table(["", ""], [[k.capitalize(), t.get(k, "")] for k in
+        w.table(None, [[k.capitalize(), t.get(k, "")] for k in
                            ("project", "part", "revision", "author", "date")]
                 + [["Program", f"fitcheck {rep.version}, generated {rep.generated}"]], [0.25, 0.75])
         w.para("CAUTION. " + CAUTION, box=True, weight="bold", color="#840")

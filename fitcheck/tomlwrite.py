@@ -27,6 +27,7 @@ Rules:
 * strings are basic strings with every control character escaped;
 * a small table of plain values nested in a table is written inline
   (``{ base = "C45E", Rp02 = "500 MPa" }``), a larger one as a ``[sub.table]``;
+  likewise a short array of small tables (``layers = [{ thickness = "6 mm" }]``);
 * floats are written with :func:`repr` (shortest form that reads back to the
   same float); ``inf`` and ``nan`` are written as TOML's ``inf``/``nan``.
 """
@@ -139,8 +140,9 @@ def _write_table(lines: list[str], path: list[str], table: Mapping, header: str 
     for k, v in table.items():
         if isinstance(v, Mapping) and not (header is not None and _inline_ok(v)):
             subtables.append((k, v))  # top-level tables always get a header
-        elif _is_table_array(v):
-            subtables.append((k, v))
+        elif _is_table_array(v) and not (header is not None and all(_inline_ok(x) for x in v)
+                                         and len(format_value(v)) <= 2 * INLINE_MAX):
+            subtables.append((k, v))  # short arrays of small tables stay inline
         else:
             plain.append((k, v))
     if header is not None:
