@@ -36,6 +36,7 @@ class Field:
     label: str = ""
     options: tuple[str, ...] = ()     # a choice among these (free text when empty)
     material: bool = False            # a material name or an inline table from the file
+    kind: str = "auto"                # how typed text is stored: auto, text, bool, list
 
 
 def label_of(key: str) -> str:
@@ -96,7 +97,7 @@ def bind(table: str, prefix: str, name: str, fields: Sequence[Field]) -> dict:
             else:
                 ss[k] = AS_IN_FILE if isinstance(current, Mapping) else (current or "")
         else:
-            widgets.pull(entry, k, f.key)
+            widgets.pull(entry, k, f.key, f.kind)
     return entry
 
 

@@ -39,7 +39,7 @@ _SYMBOL = {
     "N*m": "N·m", "lbf*in": "lbf·in", "rpm": "rpm", "s": "s", "kg/m**3": "kg/m³",
     "lb/in**3": "lb/in³", "1/K": "1/K", "1/delta_degF": "1/°F", "K": "K", "delta_degF": "°F",
     "N/mm": "N/mm", "lbf/in": "lbf/in", "mm/N": "mm/N", "in/lbf": "in/lbf", "deg": "°",
-    "degC": "°C", "degF": "°F", "N*mm": "N·mm", "uin": "µin", "psi": "psi", "": "",
+    "degC": "°C", "degF": "°F", "N*mm": "N·mm", "uin": "µin", "psi": "psi", "mm**2": "mm²", "in**2": "in²", "": "",
 }
 
 # Input text is rewritten per dimensionality: (SI unit, inch unit).
@@ -50,6 +50,7 @@ _INPUT = [
     ("[force] * [length]", "N*m", "lbf*in"),
     ("[mass] / [length] ** 3", "kg/m**3", "lb/in**3"),
     ("[force] / [length]", "N/mm", "lbf/in"),
+    ("[length] ** 2", "mm**2", "in**2"),
 ]
 _SMALL = {"um", "micrometer", "micrometre", "micron", "µm", "uin", "microinch"}
 

@@ -3,6 +3,7 @@
 from __future__ import annotations
 
 import math
+import re
 from collections.abc import Iterable, Mapping, Sequence
 
 import matplotlib.pyplot as plt
@@ -39,51 +40,85 @@ def notice() -> None:
 
 # --------------------------------------------------------------------------- inputs bound to the case
 
-def _as_text(v) -> str:
-    if isinstance(v, str):
-        return v
+INLINE = "(inline table in the case file)"
+_INT = re.compile(r"^[+-]?\d+$")
+_FLOAT = re.compile(r"^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$")
+
+
+def _scalar_text(v) -> str:
     if isinstance(v, bool):
         return "true" if v else "false"
-    if isinstance(v, float) and v.is_integer():
-        return repr(v)
-    return "" if v is None else str(v)
+    return v if isinstance(v, str) else ("" if v is None else str(v))
 
 
-def _from_text(text: str, old):
-    """A typed text back into the document; numbers stay numbers when they were numbers."""
-    t = text.strip()
-    if isinstance(old, bool):
-        return t.lower() in ("true", "yes", "1")
-    if isinstance(old, int | float) and not isinstance(old, bool):
-        try:
-            return int(t) if isinstance(old, int) and t.lstrip("+-").isdigit() else float(t)
-        except ValueError:
-            return t  # the engine names the problem
+def as_text(v) -> str:
+    """A document value as the text of an input field (lists as 'a, b' and 'x, y; x, y')."""
+    if isinstance(v, dict):
+        return INLINE
+    if isinstance(v, list):
+        if v and all(isinstance(p, list) for p in v):
+            return "; ".join(", ".join(_scalar_text(x) for x in p) for p in v)
+        return ", ".join(_scalar_text(x) for x in v)
+    return _scalar_text(v)
+
+
+def _number_or_text(t: str):
+    if _INT.match(t):
+        return int(t)
+    if _FLOAT.match(t):
+        return float(t)
     return t
 
 
-def pull(entry: dict, wkey: str, key: str) -> None:
+def from_text(text: str, old, kind: str = "auto"):
+    """A typed text back into a document value.
+
+    ``kind``: "text" keeps text; "bool" gives true/false; "list" reads 'a, b' and
+    'x, y; x, y'; "auto" keeps the type the value had (a bare number becomes a
+    number when the key was not set).
+    """
+    t = text.strip()
+    if kind == "bool" or isinstance(old, bool):
+        low = t.lower()
+        return True if low in ("true", "yes", "1") else False if low in ("false", "no", "0") else t
+    if kind == "text":
+        return t
+    if kind == "list" or isinstance(old, list):
+        if ";" in t or (isinstance(old, list) and old and all(isinstance(p, list) for p in old)):
+            return [[_number_or_text(x.strip()) for x in part.split(",")]
+                    for part in t.split(";") if part.strip()]
+        if "," in t:
+            return [_number_or_text(x.strip()) for x in t.split(",")]
+        return _number_or_text(t)
+    if isinstance(old, str):
+        return t
+    return _number_or_text(t)
+
+
+def pull(entry: dict, wkey: str, key: str, kind: str = "auto") -> None:
     """Before the page is drawn: copy a widget's value into the document, or seed the widget.
 
     Streamlit holds a changed widget's value in the session before the script
     reruns, so the document (and the results) are up to date before any widget
     is drawn; a widget Streamlit forgot on another page is seeded from the document.
+    A value is written back only when its text changed, so the document keeps the
+    exact text (and TOML type) it was opened with.
     """
     ss = st.session_state
-    if wkey in ss:
-        v = ss[wkey]
-        if isinstance(v, str):
-            if not v.strip():
-                entry.pop(key, None)
-            elif key not in entry or v != _as_text(entry[key]):
-                entry[key] = _from_text(v, entry.get(key))
-        elif v is not None:
+    if wkey not in ss:
+        ss[wkey] = as_text(entry[key]) if key in entry else ""
+        return
+    v = ss[wkey]
+    if not isinstance(v, str):
+        if v is not None:
             entry[key] = v
-    else:
-        if key in entry and not isinstance(entry[key], dict | list):
-            ss[wkey] = entry[key] if isinstance(entry[key], bool) else _as_text(entry[key])
-        else:
-            ss[wkey] = ""
+        return
+    if v == INLINE and isinstance(entry.get(key), dict):
+        return
+    if not v.strip():
+        entry.pop(key, None)
+    elif key not in entry or v != as_text(entry[key]):
+        entry[key] = from_text(v, entry.get(key), kind)
 
 
 def text_field(label: str, wkey: str, help: str | None = None, error: InputError | None = None,
