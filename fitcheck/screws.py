@@ -23,7 +23,7 @@ moment, transverse force and torque about the axis; the most loaded screw is che
 ...     "tightening": "torque_wrench_estimated_friction"})
 >>> r = evaluate(inp)
 >>> round(r.tightening_torque / 1000, 1)   # N·m
-9.7
+9.1
 >>> r.ok
 True
 """

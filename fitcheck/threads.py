@@ -217,8 +217,8 @@ def property_class(name: str, d: float, field: str = "property_class") -> Proper
     if ranges is None:
         raise InputError(field, name, "a property class: " + ", ".join(property_class_names()),
                          did_you_mean(name, property_class_names()))
-    for lo, up, pc in ranges:
-        if lo < d <= up or (lo == 0 and d <= up):
+    for i, (lo, up, pc) in enumerate(ranges):
+        if lo < d <= up or (i == 0 and lo - 1e-9 <= d <= up):  # the first range includes its lower end
             return pc
     lo0, up_last = ranges[0][0], ranges[-1][1]
     if d <= lo0:
