@@ -66,7 +66,7 @@ def render() -> None:
     with right:
         _suggestion(name, entry)
         if jr is None:
-            st.info("Correct the inputs marked ✋ to see the results.")
+            st.info("Correct the inputs marked with the error sign to see the results.")
             return
         _results(jr.result, system)
         widgets.warnings_box(msgs)

@@ -119,7 +119,7 @@ def render() -> None:
         if ss.get("cf.opened"):
             st.success(f"Opened {ss.pop('cf.opened')}.")
         for e in ss.get("cf.upload_errors", []):
-            st.error(widgets.error_text(e), icon="✋")
+            st.error(widgets.error_text(e), icon=":material/error:")
         if ss.get(PENDING) is not None:
             st.button("Open it anyway and correct it here", key="cf.open_anyway",
                       on_click=_open_pending)
@@ -132,6 +132,8 @@ def render() -> None:
                            key="cf.download_toml", icon=":material/download:")
         with st.expander("Case file text"):
             st.code(case_text(), language="toml")
+        st.subheader("Calculation report")
+        _report_buttons()
     with right:
         st.subheader("Title block")
         title = state.doc().setdefault("title", {})
@@ -146,8 +148,6 @@ def render() -> None:
             if not title:
                 state.doc().pop("title", None)
         _conditions()
-        st.subheader("Calculation report")
-        _report_buttons()
 
 
 def _conditions() -> None:
@@ -184,7 +184,7 @@ def _report_buttons() -> None:
     except (InputError, InputErrors) as exc:
         st.warning("The report needs a case without input problems:")
         for e in state.errors_by_field(exc):
-            st.error(widgets.error_text(e), icon="✋")
+            st.error(widgets.error_text(e), icon=":material/error:")
         return
     st.caption("The report carries the inputs, the method with its clauses, every check, the "
                "plots, the caution and signature lines.")

@@ -119,7 +119,7 @@ def render() -> None:
                       help="Nominal size, hole class and/or shaft class, e.g. '25 H7/p6', "
                       "'40 k6', '1 in H7/g6'. Press Enter to apply.")
         if ss.get("fl.text_error") is not None:
-            st.error(widgets.error_text(ss["fl.text_error"]), icon="✋")
+            st.error(widgets.error_text(ss["fl.text_error"]), icon=":material/error:")
         st.caption("…or pick:")
         st.text_input("Nominal size", key=K_SIZE, on_change=_on_pick,
                       help="A length with its unit: '25 mm' or '0.984 in' (a bare number is mm).")
@@ -132,7 +132,7 @@ def render() -> None:
         except InputError as e:
             size_error = e
         if size_error is not None:
-            st.error(widgets.error_text(size_error), icon="✋")
+            st.error(widgets.error_text(size_error), icon=":material/error:")
         c1, c2 = st.columns(2)
         with c1:
             _class_select("Hole class", K_HOLE, [NONE, *holes], v["hole"])
@@ -156,7 +156,7 @@ def render() -> None:
             try:
                 f = _fit(v["size"], hole, shaft)
             except InputError as e:
-                st.error(widgets.error_text(e), icon="✋")
+                st.error(widgets.error_text(e), icon=":material/error:")
             else:
                 _show_fit(f, system)
     with st.expander("Preferred fits", expanded=False):

@@ -110,7 +110,7 @@ def draw_layers(name: str, errors) -> None:
                            "material", options=[*materials.names(), widgets.INLINE], required=True),
                    })
     for e in errors:
-        st.error(widgets.error_text(e), icon="✋")
+        st.error(widgets.error_text(e), icon=":material/error:")
 
 
 # --------------------------------------------------------------------------- page
@@ -136,7 +136,7 @@ def render() -> None:
         joints.draw_inputs(TABLE, PREFIX, name, groups, screws.KEYS, others)
     if jr is None:
         with right:
-            st.info("Correct the inputs marked ✋ to see the results.")
+            st.info("Correct the inputs marked with the error sign to see the results.")
         return
     r = jr.result
     with right:

@@ -139,13 +139,14 @@ def draw_inputs(table: str, prefix: str, name: str, groups: Sequence[tuple[str, 
     by_key, rest = widgets.match_errors(errors, label, all_keys)
     for i, (title, fs) in enumerate(groups):
         bad = any(f.key in by_key for f in fs)
-        with st.expander(title + ("  ✋" if bad else ""), expanded=(i < expanded) or bad):
+        with st.expander(title + (" — check the inputs" if bad else ""), expanded=(i < expanded) or bad,
+                         icon=":material/error:" if bad else None):
             cols = st.columns(2)
             for j, f in enumerate(fs):
                 with cols[j % 2]:
                     _draw(prefix, name, f, keys.get(f.key, ""), by_key.get(f.key))
     for e in rest:
-        st.error(widgets.error_text(e), icon="✋")
+        st.error(widgets.error_text(e), icon=":material/error:")
 
 
 def _draw(prefix: str, name: str, f: Field, description: str, error: InputError | None) -> None:

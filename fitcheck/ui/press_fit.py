@@ -90,7 +90,7 @@ def render() -> None:
         joints.draw_inputs(TABLE, PREFIX, name, groups, pressfit.KEYS, errors, expanded=2)
     if jr is None:
         with right:
-            st.info("Correct the inputs marked ✋ to see the results.")
+            st.info("Correct the inputs marked with the error sign to see the results.")
         return
     r = jr.result
     with right:

@@ -62,7 +62,7 @@ def render() -> None:
             with st.container(border=True):
                 st.markdown(f"**{label}** — correct these inputs on its page:")
                 for e in errs:
-                    st.error(widgets.error_text(e), icon="✋")
+                    st.error(widgets.error_text(e), icon=":material/error:")
 
     st.subheader("Joints, weakest first")
     rows = []
@@ -76,11 +76,12 @@ def render() -> None:
             "margin": "—" if w is None or not math.isfinite(w.margin) else f"{w.margin * 100:+.1f} %",
             "checks failing": sum(not c.passed for c in j.checks),
         })
-    st.dataframe(pd.DataFrame(rows), hide_index=True, width="stretch", key="cv.joints")
+    st.dataframe(widgets.styled(pd.DataFrame(rows)), hide_index=True, width="stretch",
+                 key="cv.joints", height=widgets.table_height(len(rows)))
 
     st.subheader("All checks, worst margin first")
-    st.dataframe(widgets.checks_table(checks, system), hide_index=True, width="stretch",
-                 key="cv.checks")
+    st.dataframe(widgets.styled(widgets.checks_table(checks, system)), hide_index=True,
+                 width="stretch", key="cv.checks", height=widgets.table_height(len(checks)))
     for label, msgs in notes.items():
         widgets.warnings_box([f"{label}: {m}" for m in msgs])
 

@@ -15,13 +15,27 @@ from fitcheck.errors import InputError
 from fitcheck.ui import state, unitsys
 
 PASS, FAIL = "✔ holds", "✘ FAILS"
+SENSE = {">=": "≥", "<=": "≤"}
+
+
+def table_height(n_rows: int) -> int:
+    """Height that shows every row of a table without its own scroll bar (up to 40 rows)."""
+    return 38 + 35 * max(1, min(n_rows, 40))
+
+
+def styled(df: pd.DataFrame):
+    """A verdict column coloured: green when it holds, red when it fails."""
+    if "verdict" not in df.columns or df.empty:
+        return df
+    return df.style.map(lambda v: "color: #0b6e3a; font-weight: 600" if v == PASS else
+                        "color: #b3261e; font-weight: 700" if v == FAIL else "", subset=["verdict"])
 
 
 # --------------------------------------------------------------------------- page furniture
 
 def caution() -> None:
     """The caution every page carries (``fitcheck.CAUTION``)."""
-    st.warning(fitcheck.CAUTION, icon="⚠️")
+    st.warning(fitcheck.CAUTION, icon=":material/warning:")
 
 
 def figure(fig) -> None:
@@ -126,7 +140,7 @@ def text_field(label: str, wkey: str, help: str | None = None, error: InputError
     """A text input (a value with its unit) with the library's message for it right below."""
     st.text_input(label, key=wkey, help=help, placeholder=placeholder)
     if error is not None:
-        st.error(error_text(error), icon="✋")
+        st.error(error_text(error), icon=":material/error:")
 
 
 def choice_field(label: str, wkey: str, options: Sequence[str], help: str | None = None,
@@ -141,7 +155,7 @@ def choice_field(label: str, wkey: str, options: Sequence[str], help: str | None
             ss[wkey] = opts[0]
     st.selectbox(label, opts, key=wkey, help=help, format_func=lambda o: o if o else empty)
     if error is not None:
-        st.error(error_text(error), icon="✋")
+        st.error(error_text(error), icon=":material/error:")
 
 
 def error_text(e: InputError) -> str:
@@ -193,7 +207,7 @@ def checks_table(checks: Iterable, system: str, joint_of=None) -> pd.DataFrame:
             "verdict": PASS if chk.passed else FAIL,
             "check": chk.name,
             "value": unitsys.show_in(chk.value, chk.unit, system),
-            "must be": f"{chk.sense} {unitsys.show_in(chk.limit, chk.unit, system)}",
+            "must be": f"{SENSE[chk.sense]} {unitsys.show_in(chk.limit, chk.unit, system)}",
             "margin": "—" if not math.isfinite(m) else f"{m * 100:+.1f} %",
             "reference": chk.reference,
         })
@@ -208,7 +222,8 @@ def show_checks(checks: Sequence, system: str, key: str) -> None:
     if df.empty:
         st.info("No checks for this joint.")
         return
-    st.dataframe(df, hide_index=True, width="stretch", key=key,
+    st.dataframe(styled(df), hide_index=True, width="stretch", key=key,
+                 height=table_height(len(df)),
                  column_config={"reference": st.column_config.TextColumn(width="large")})
 
 
@@ -222,11 +237,11 @@ def verdict_banner(ok: bool, worst=None, system: str = "SI") -> None:
     m = chk.margin
     mtxt = "" if not math.isfinite(m) else f" (margin {m * 100:+.1f} %)"
     if ok:
-        st.success(f"Every check holds. Smallest margin: {where}{chk.name}{mtxt}.", icon="✅")
+        st.success(f"Every check holds. Smallest margin: {where}{chk.name}{mtxt}.", icon=":material/check_circle:")
     else:
         st.error(f"Does not hold: {where}{chk.name} — "
                  f"{unitsys.show_in(chk.value, chk.unit, system)} against "
-                 f"{chk.sense} {unitsys.show_in(chk.limit, chk.unit, system)}{mtxt}.", icon="🛑")
+                 f"{SENSE[chk.sense]} {unitsys.show_in(chk.limit, chk.unit, system)}{mtxt}.", icon=":material/cancel:")
 
 
 def warnings_box(messages: Iterable[str]) -> None:
@@ -238,4 +253,4 @@ def warnings_box(messages: Iterable[str]) -> None:
 def kv_table(rows: Mapping[str, str] | Sequence[tuple[str, str]], key: str | None = None) -> None:
     items = list(rows.items()) if isinstance(rows, Mapping) else list(rows)
     st.dataframe(pd.DataFrame(items, columns=["quantity", "value"]), hide_index=True,
-                 width="stretch", key=key)
+                 width="stretch", key=key, height=table_height(len(items)))
