@@ -6,7 +6,7 @@ import warnings
 from fitcheck.screws import ScrewJointInput, evaluate
 
 CASE = {
-    "name": "gearhead cover", "thread": "M5", "property_class": "10.9", "head": "socket",
+    "name": "gearhead cover", "thread": "M5", "property_class": "10.9", "head": "socket", "washer": True,
     "layers": [{"thickness": "6 mm", "material": "EN AW-6082-T6"}], "engagement": "10 mm",
     "housing_material": "EN AC-46000", "count": 6, "bolt_circle": "72 mm", "axial_force": "1.8 kN",
     "tilting_moment": "25 N*m", "transverse_force": "600 N", "torque_about_axis": "8 N*m",
