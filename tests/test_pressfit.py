@@ -378,3 +378,18 @@ def test_plots_return_figures():
     assert prof["vm_hub"][0] == pytest.approx(r.hub_stress_max, rel=1e-9)
     t = r.torque_capacity_at(np.array([r.interference_min]))
     assert t[0] == pytest.approx(r.loosest_operating.torque_capacity, rel=1e-9)
+
+
+def test_blocked_evaluation_equals_direct():
+    from fitcheck.core import pressfit as core
+
+    rng = np.random.default_rng(7)
+    n = 2 * core.CHUNK + 123
+    kw = dict(interference_min=rng.uniform(-0.01, 0.04, n), interference_max=0.05,
+              d=rng.uniform(10.0, 30.0, n), L=16.0, Do=60.0, di=rng.uniform(0.0, 5.0, n), Es=E, nus=0.3,
+              Rps=490.0, Eh=E, nuh=0.3, Rph=490.0, mu_slip=0.1, omega=rng.uniform(0.0, 900.0, n),
+              torque=5000.0, brittle_hub=rng.uniform(size=n) > 0.5, Rmh=250.0)
+    blocked = core.evaluate(**kw)
+    direct = core._block(**kw)
+    for k in OUTPUT_KEYS:
+        np.testing.assert_array_equal(blocked[k], np.broadcast_to(direct[k], (n,)), err_msg=k)

@@ -79,9 +79,9 @@ from __future__ import annotations
 
 import numpy as np
 
-from . import lame
-
 __all__ = ["evaluate", "OUTPUT_KEYS"]
+
+CHUNK = 1 << 16  # joints per block of work (fits the CPU caches)
 
 OUTPUT_KEYS = (
     "delta_eff_min_op", "delta_eff_max_op", "delta_eff_min_asm", "delta_eff_max_asm",
@@ -141,6 +141,41 @@ def evaluate(*, interference_min, interference_max=None, d, L, di=0.0, Do,
     >>> round(float(r["torque_capacity_min"]) / 1e3)
     1014
     """
+    kw = dict(locals())
+    arrays = [np.shape(v) for v in kw.values() if v is not None and np.ndim(v) > 0]
+    shape = np.broadcast_shapes(*arrays) if arrays else ()
+    n = int(np.prod(shape)) if shape else 1
+    if n <= 2 * CHUNK:
+        out = _block(**kw)
+        full = np.broadcast_shapes(*(np.shape(v) for v in out.values()))
+        return {k: (v if np.shape(v) == full else np.broadcast_to(v, full)) for k, v in out.items()}
+    # Work through long arrays in cache-sized blocks: the same vectorised arithmetic, about
+    # twice as fast as whole-array temporaries that spill out of the CPU caches.
+    flat = {k: (np.broadcast_to(np.asarray(v, dtype=np.float64 if np.asarray(v).dtype != bool else bool),
+                                shape).reshape(-1) if v is not None and np.ndim(v) > 0 else v)
+            for k, v in kw.items()}
+    out: dict = {}
+    for start in range(0, n, CHUNK):
+        sl = slice(start, min(start + CHUNK, n))
+        part = _block(**{k: (v[sl] if isinstance(v, np.ndarray) and v.ndim == 1 else v)
+                         for k, v in flat.items()})
+        if not out:
+            out = {k: np.empty(n, dtype=np.asarray(v).dtype) for k, v in part.items()}
+        for k, v in part.items():
+            out[k][sl] = v
+    return {k: v.reshape(shape) for k, v in out.items()}
+
+
+def _block(*, interference_min, interference_max=None, d, L, di=0.0, Do,
+             Es, nus, alphas=11.5e-6, Rps, rhos=7.85e-9,
+             Eh, nuh, alphah=11.5e-6, Rph, rhoh=7.85e-9,
+             mu_slip, mu_press=None, rz_shaft=0.0, rz_hub=0.0, smoothing=0.8,
+             torque=0.0, axial_force=0.0, slip_safety=1.5, omega=0.0,
+             T_shaft=20.0, T_hub=20.0, T_assembly=20.0, joining_clearance=None,
+             yield_safety=1.2, brittle_shaft=False, brittle_hub=False, Rms=np.inf, Rmh=np.inf,
+             fracture_safety=2.0, shrink=False, max_heating=np.inf, T_shaft_cooled=None,
+             press_force_limit=np.inf) -> dict:
+    """One block of :func:`evaluate` (arguments and results as there)."""
     f64 = np.float64
     dmin = np.asarray(interference_min, dtype=f64)
     dmax = dmin if interference_max is None else np.asarray(interference_max, dtype=f64)
@@ -155,27 +190,39 @@ def evaluate(*, interference_min, interference_max=None, d, L, di=0.0, Do,
         T_shaft_cooled = T_assembly
 
     # ---- geometry-only factors (cheap when geometry is scalar) --------------------------
-    qa = lame._ratio(d, Do)
+    qa = d / Do                               # Do = inf gives 0
     qa2 = qa * qa
-    qi = lame._ratio(di, d)
+    qi = di / d
     qi2 = qi * qi
     th = (1.0 + qa2) / (1.0 - qa2)            # hub: sigma_t / p at the bore
     ts = (1.0 + qi2) / (1.0 - qi2)            # shaft: -sigma_t / p at the surface
     k = (th + nuh) / Eh + (ts - nus) / Es     # Shigley eq. (3-56), per unit d
     c_p = 1.0 / (d * k)                       # p = c_p * delta_eff  [MPa/mm]
-    g_in = np.where(di > 0.0, 2.0 / (1.0 - qi2), 1.0)  # shaft: |sigma_t| / p at bore (or centre)
+    hollow = di > 0.0
+    g_in = np.where(hollow, 2.0 / (1.0 - qi2), 1.0)  # shaft: |sigma_t| / p at bore (or centre)
+
+    # ---- rotation: stresses per unit omega² at the free surfaces (Shigley eq. (3-55)) -----
+    R2 = 0.25 * d * d
+    c2 = 0.25 * di * di
+    kh_bore = 0.25 * rhoh * ((3.0 + nuh) * (0.25 * Do * Do) + (1.0 - nuh) * R2)   # hub, r = r_i
+    ks_surf = 0.25 * rhos * ((3.0 + nus) * c2 + (1.0 - nus) * R2)                # shaft, r = r_o
+    ks_in = np.where(hollow, 0.25 * rhos * ((3.0 + nus) * R2 + (1.0 - nus) * c2),
+                     0.125 * rhos * (3.0 + nus) * R2)                            # bore or centre
+    # diametral loss per unit omega²: 2·(u_h − u_s), u = (d/2)·sigma_t/E at a free surface
+    c_rot = d * (kh_bore / Eh - ks_surf / Es)
 
     # ---- interference changes -------------------------------------------------------------
     loss_rz = smoothing * (np.asarray(rz_shaft, dtype=f64) + np.asarray(rz_hub, dtype=f64))
-    d_th = lame.thermal_interference_change(d, alphas, alphah, T_shaft, T_hub, T_assembly)
+    d_th = d * (alphas * (np.asarray(T_shaft, dtype=f64) - T_assembly)
+                - alphah * (np.asarray(T_hub, dtype=f64) - T_assembly))
     w2 = np.asarray(omega, dtype=f64) ** 2
-    c_rot = lame.centrifugal_interference_loss(1.0, d, di, Do, Es, nus, rhos, Eh, nuh, rhoh)
-    d_op = d_th - w2 * c_rot                  # total change at operating condition
+    d_w = w2 * c_rot
+    d_op = d_th - d_w                         # total change at operating condition
 
     de_min_asm = dmin - loss_rz
     de_max_asm = dmax - loss_rz
     de_min_th = de_min_asm + d_th
-    de_min_op = de_min_th - w2 * c_rot
+    de_min_op = de_min_th - d_w
     de_max_op = de_max_asm + d_op
 
     p_min_asm = np.maximum(de_min_asm * c_p, 0.0)
@@ -195,15 +242,9 @@ def evaluate(*, interference_min, interference_max=None, d, L, di=0.0, Do,
     s_slip = np.where(demand > 0.0, s_slip, np.where(f_cap > 0.0, np.inf, 0.0))
 
     # ---- stresses at the tightest case -------------------------------------------------------
-    rho_w2_h = rhoh * w2
-    rho_w2_s = rhos * w2
-    R2 = 0.25 * d * d
-    c2 = 0.25 * di * di
-    b2 = 0.25 * Do * Do
-    rot_hub_bore = 0.25 * rho_w2_h * ((3.0 + nuh) * b2 + (1.0 - nuh) * R2)  # Shigley (3-55), r = r_i
-    rot_sh_surf = 0.25 * rho_w2_s * ((3.0 + nus) * c2 + (1.0 - nus) * R2)   # r = r_o
-    rot_sh_in = np.where(di > 0.0, 0.25 * rho_w2_s * ((3.0 + nus) * R2 + (1.0 - nus) * c2),
-                         0.125 * rho_w2_s * (3.0 + nus) * R2)                # bore or centre
+    rot_hub_bore = w2 * kh_bore
+    rot_sh_surf = w2 * ks_surf
+    rot_sh_in = w2 * ks_in
 
     # hub bore: assembly (omega = 0) and operating
     sr_op = -p_max_op

@@ -1,0 +1,76 @@
+"""Vectorised press-fit evaluations per second (fitcheck.core.pressfit.evaluate).
+
+Two workloads of 10**6 joints, every result and check of the kernel computed:
+
+* tolerance study — sampled interferences (arrays), geometry and materials scalar
+  (what a Monte-Carlo tolerance study of one joint passes);
+* everything varies — interferences, diameter, length, hub diameter, shaft bore,
+  roughness, speed and temperatures all 10**6-long arrays.
+
+Goal: >= 5e6 joints/s on one core. Run: ``.venv/bin/python bench/bench_pressfit.py``.
+"""
+
+from __future__ import annotations
+
+import os
+import time
+
+os.environ.setdefault("OMP_NUM_THREADS", "1")  # one core
+
+import numpy as np  # noqa: E402
+
+from fitcheck.core.pressfit import evaluate  # noqa: E402
+
+N = 1_000_000
+REPEAT = 7
+
+
+def _best(fn) -> float:
+    fn()  # warm-up
+    times = []
+    for _ in range(REPEAT):
+        t0 = time.perf_counter()
+        fn()
+        times.append(time.perf_counter() - t0)
+    return min(times)
+
+
+def main() -> None:
+    rng = np.random.default_rng(0)
+    imin = rng.normal(0.020, 0.004, N)
+    imax = imin + rng.uniform(0.01, 0.03, N)
+    common = dict(Es=210000.0, nus=0.3, alphas=11.5e-6, Rps=490.0, rhos=7.85e-9,
+                  Eh=210000.0, nuh=0.3, alphah=11.5e-6, Rph=490.0, rhoh=7.85e-9,
+                  mu_slip=0.1, mu_press=0.12, torque=12000.0, axial_force=300.0,
+                  yield_safety=1.2, shrink=True, max_heating=350.0, press_force_limit=30000.0)
+
+    def study():
+        return evaluate(interference_min=imin, interference_max=imax, d=20.0, L=16.0, Do=56.25,
+                        rz_shaft=0.004, rz_hub=0.0063, omega=314.0, T_shaft=60.0, T_hub=70.0, **common)
+
+    d = rng.uniform(19.99, 20.01, N)
+    L = rng.uniform(15.9, 16.1, N)
+    Do = rng.uniform(50.0, 60.0, N)
+    di = rng.uniform(0.0, 8.0, N)
+    rzs = rng.uniform(0.002, 0.006, N)
+    rzh = rng.uniform(0.004, 0.008, N)
+    w = rng.uniform(0.0, 600.0, N)
+    ts = rng.uniform(20.0, 80.0, N)
+    th = rng.uniform(20.0, 90.0, N)
+
+    def everything():
+        return evaluate(interference_min=imin, interference_max=imax, d=d, L=L, Do=Do, di=di,
+                        rz_shaft=rzs, rz_hub=rzh, omega=w, T_shaft=ts, T_hub=th, **common)
+
+    out = study()
+    assert out["ok"].shape == (N,)
+    t1 = _best(study)
+    t2 = _best(everything)
+    print(f"press-fit kernel, {N:.0e} joints, best of {REPEAT}, numpy {np.__version__}")
+    print(f"  tolerance study (interference arrays): {N / t1 / 1e6:6.2f} million joints/s ({t1 * 1e3:.0f} ms)")
+    print(f"  every input an array:                 {N / t2 / 1e6:6.2f} million joints/s ({t2 * 1e3:.0f} ms)")
+    print("  goal: 5 million joints/s on one core")
+
+
+if __name__ == "__main__":
+    main()
