@@ -561,6 +561,17 @@ class JointResult:
     def ok(self) -> bool:
         return bool(self.result.ok)
 
+    @property
+    def notes(self) -> tuple[str, ...]:
+        """Warnings given while evaluating and the notes and warnings the result carries."""
+        out = list(self.warnings)
+        for attr in ("warnings", "notes"):
+            extra = getattr(self.result, attr, ())
+            if isinstance(extra, str):
+                extra = (extra,)
+            out.extend(str(x) for x in (extra or ()))
+        return tuple(dict.fromkeys(out))
+
 
 @dataclass(frozen=True)
 class CaseCheck:
@@ -613,7 +624,8 @@ class CaseResult:
 
     @property
     def warnings(self) -> list[str]:
-        return [f"{j.label}: {w}" for j in self.joints for w in j.warnings]
+        """Every joint's warnings and notes, each led by the joint's label."""
+        return [f"{j.label}: {w}" for j in self.joints for w in j.notes]
 
     def to_dict(self) -> dict:
         return {

@@ -74,12 +74,13 @@ class Report:
     version: str = __version__
 
     def close(self) -> None:
-        """Close every matplotlib figure the report holds."""
+        """Release the figures the report holds (closing any that pyplot manages)."""
         import matplotlib.pyplot as plt
 
         for s in self.sections:
             for _, fig in s.figures:
-                plt.close(fig)
+                if plt.fignum_exists(getattr(fig, "number", -1)):
+                    plt.close(fig)
             s.figures.clear()
 
 
@@ -161,38 +162,56 @@ def _inputs(jr: JointResult, case: DesignCase, keys) -> list[tuple[str, str, str
     return rows
 
 
-def _fit_designations(jr: JointResult) -> list[str]:
-    """ISO 286 fit designations ("25 H7/p6") a joint states, for the tolerance-zone diagram."""
-    out = []
+def _fits(jr: JointResult) -> list[tuple[str, object]]:
+    """ISO 286 fits a joint states, for the tolerance-zone diagrams: ``[(caption, Fit), …]``.
+
+    A press fit names its fit (``fit = "16 H7/s6"``); a bearing seat has a shaft class on
+    the bore and a housing class on the outside diameter (single zones).
+    """
+    from .fits import fit as make_fit
+
+    out, seen = [], set()
+
+    def add(caption, *args, **kw):
+        key = (args, tuple(sorted(kw.items())))
+        if key not in seen:
+            seen.add(key)
+            out.append((caption, make_fit(*args, **kw)))
+
     for obj in (jr.result, jr.input):
-        for attr in ("fit", "fit_designation", "shaft_fit", "housing_fit"):
-            v = getattr(obj, attr, None)
-            if isinstance(v, str) and "/" in v and v not in out:
-                out.append(v)
-            elif v is not None and hasattr(v, "to_dict") and not isinstance(v, str):
-                d = getattr(v, "designation", None) or str(v)
-                if d not in out:
-                    out.append(v)
+        f = getattr(obj, "fit", None)
+        if isinstance(f, str) and "/" in f:
+            add(f"Tolerance zones of the fit {f}", f)
+        elif f is not None and hasattr(f, "designation") and hasattr(f, "hole"):
+            seen.add(f.designation)
+            out.append((f"Tolerance zones of the fit {f.designation}", f))
+    r = jr.result
+    bore, shaft = getattr(r, "bore_mm", None), getattr(r, "shaft_class", None)
+    if isinstance(bore, float | int) and isinstance(shaft, str):
+        add(f"Tolerance zone of the inner-ring seat {bore:g} {shaft}", float(bore), shaft=shaft)
+    outside, housing = getattr(r, "outside_mm", None), getattr(r, "housing_class", None)
+    if isinstance(outside, float | int) and isinstance(housing, str):
+        add(f"Tolerance zone of the outer-ring seat {outside:g} {housing}", float(outside),
+            hole=housing)
     return out
 
 
 def _figures(jr: JointResult, eng) -> tuple[list[tuple[str, object]], list[str]]:
     figs, errors = [], []
-    fits = _fit_designations(jr)
-    if fits:
+    try:
+        from .plots.fits import plot_fit
+
+        fits = _fits(jr)
+    except ImportError:  # the limits engine is not installed: no zone diagrams
+        fits, plot_fit = [], None
+    except InputError as exc:
+        fits, plot_fit = [], None
+        errors.append(f"tolerance-zone diagram: {exc}")
+    for caption, f in fits:
         try:
-            from .fits import fit as make_fit
-            from .plots.fits import plot_fit
-        except ImportError:
-            make_fit = plot_fit = None
-        if plot_fit is not None:
-            for f in fits:
-                try:
-                    obj = make_fit(f) if isinstance(f, str) else f
-                    figs.append((f"Tolerance zones of {getattr(obj, 'designation', f)}",
-                                 plot_fit(obj)))
-                except Exception as exc:  # a plot must not hide the rest of the report
-                    errors.append(f"tolerance-zone diagram of {f}: {type(exc).__name__}: {exc}")
+            figs.append((caption, plot_fit(f)))
+        except Exception as exc:  # a plot must not hide the rest of the report
+            errors.append(f"{caption}: {type(exc).__name__}: {exc}")
     for fn in eng.plot_functions():
         caption = fn.__name__.removeprefix("plot_").replace("_", " ").capitalize()
         try:
@@ -220,7 +239,7 @@ def build(result: CaseResult | DesignCase, *, plots: bool = True) -> Report:
             heading=f"{eng.label}: {jr.name}", label=jr.label,
             inputs=_inputs(jr, case, getattr(mod, "KEYS", {})),
             method=_method_steps(getattr(mod, "METHOD_NOTES", ())),
-            checks=list(jr.checks), ok=jr.ok, warnings=list(jr.warnings),
+            checks=list(jr.checks), ok=jr.ok, warnings=list(jr.notes),
             figures=figs, plot_errors=errs))
         summary.extend((jr.label, eng.label, c) for c in jr.checks)
     return Report(title=title, conditions=[(k, format_value(v)) for k, v in case.conditions.items()],
@@ -287,6 +306,10 @@ def to_html(result: CaseResult | DesignCase | Report) -> str:
         o.append(f"<tr><th style='width:12em'>{k.capitalize()}</th><td>{_e(t.get(k, ''))}</td></tr>")
     o.append(f"<tr><th>Program</th><td>fitcheck {_e(rep.version)}, generated {_e(rep.generated)}"
              "</td></tr></table>")
+    o.append('<table class="sign"><tr><th style="width:12em">Role</th><th>Name</th>'
+             '<th>Signature</th><th style="width:9em">Date</th></tr>')
+    o.extend(f"<tr><td>{r}</td><td></td><td></td><td></td></tr>" for r in SIGNATURE_ROLES)
+    o.append("</table>")
     o.append(f'<div class="caution"><b>Caution.</b> {_e(CAUTION)}<br>{_e(DEFERENCE)}</div>')
     verdict_all = "all checks pass" if rep.ok else "at least one check FAILS"
     cls = "pass" if rep.ok else "fail"
@@ -318,16 +341,15 @@ def to_html(result: CaseResult | DesignCase | Report) -> str:
         o.append(f'<p>Verdict for {_e(s.label)}: <span class="{"pass" if s.ok else "fail"}">{v}'
                  "</span></p>")
         for w in s.warnings:
-            o.append(f'<p class="small">Warning: {_e(w)}</p>')
+            o.append(f'<p class="small">Note: {_e(w)}</p>')
         for w in s.plot_errors:
             o.append(f'<p class="small">Plot not drawn: {_e(w)}</p>')
         for cap, fig in s.figures:
             o.append(f'<figure><img alt="{_e(cap)}" src="data:image/png;base64,{_fig_png(fig)}">'
                      f"<figcaption>{_e(s.label)}: {_e(cap)}</figcaption></figure>")
-    o.append("<h2>Review and signatures</h2>")
-    o.append('<table class="sign"><tr><th>Role</th><th>Name</th><th>Signature</th><th>Date</th></tr>')
-    o.extend(f"<tr><td>{r}</td><td></td><td></td><td></td></tr>" for r in SIGNATURE_ROLES)
-    o.append("</table>")
+    o.append("<h2>End of calculation</h2>")
+    o.append(f"<p>{len(rep.summary)} checks on {len(rep.sections)} joints: "
+             f'<span class="{cls}">{verdict_all}</span>. Signatures: see the title block.</p>')
     o.append(f'<div class="caution"><b>Caution.</b> {_e(CAUTION)}<br>{_e(DEFERENCE)}</div>')
     o.append("</body></html>")
     return "\n".join(o) + "\n"
@@ -350,21 +372,18 @@ class _PdfPages:
         self.y = 0.0
 
     def _new_page(self):
-        import matplotlib.pyplot as plt
+        from matplotlib.figure import Figure
 
         self.finish_page()
-        self.fig = plt.figure(figsize=_A4)
+        self.fig = Figure(figsize=_A4)
         self.page += 1
         self.y = _A4[1] - _MARGIN
 
     def finish_page(self):
-        import matplotlib.pyplot as plt
-
         if self.fig is not None:
             self.fig.text(_MARGIN / _A4[0], 0.35 / _A4[1], f"{self.footer} — page {self.page}",
                           fontsize=7, color="0.35")
             self.pdf.savefig(self.fig)
-            plt.close(self.fig)
             self.fig = None
 
     def _need(self, h: float):
@@ -375,14 +394,14 @@ class _PdfPages:
         self.fig.text(x / _A4[0], self.y / _A4[1], s, fontsize=_SIZE[style], va="top", **kw)
 
     def wrap(self, s: str, width_in: float, style: str = "body", bold: bool = False) -> list[str]:
-        chars = max(8, int(width_in * 72 / (_SIZE[style] * _CHAR_W * (1.12 if bold else 1.0))))
+        chars = max(8, int(width_in * 72 / (_SIZE[style] * _CHAR_W * (1.18 if bold else 1.0))))
         lines = []
         for para in str(s).split("\n"):
             lines.extend(textwrap.wrap(para, chars, break_on_hyphens=False) or [""])
         return lines
 
     def heading(self, s: str, style: str = "h2"):
-        lines = self.wrap(s, _A4[0] - 2 * _MARGIN, style)
+        lines = self.wrap(s, _A4[0] - 2 * _MARGIN, style, bold=True)
         self._need(_LINE[style] * (len(lines) + 2.5))
         self.y -= _LINE[style] * 0.5
         for ln in lines:
@@ -434,13 +453,30 @@ class _PdfPages:
             draw_row(r, row_colors=colors[i] if colors else None)
         self.y -= lh * 0.6
 
-    def figure_page(self, fig, caption: str):
-        """A plot as a page of its own (kept as vector graphics), with a caption."""
-        self.finish_page()
-        self.page += 1
-        fig.text(0.01, 0.005, f"{caption} — {self.footer} — page {self.page}", fontsize=7,
-                 color="0.35", va="bottom")
-        self.pdf.savefig(fig, bbox_inches="tight", pad_inches=0.3)
+    def image(self, fig, caption: str, max_h: float = 3.9):
+        """A plot placed in the text flow (rendered at 150 dpi), with its caption below."""
+        import matplotlib.image as mpimg
+
+        buf = io.BytesIO()
+        fig.savefig(buf, format="png", dpi=150, bbox_inches="tight")
+        buf.seek(0)
+        img = mpimg.imread(buf, format="png")
+        h_px, w_px = img.shape[:2]
+        width = min(_A4[0] - 2 * _MARGIN, w_px / 150)
+        height = width * h_px / w_px
+        if height > max_h:
+            height, width = max_h, max_h * w_px / h_px
+        cap_lines = self.wrap(caption, _A4[0] - 2 * _MARGIN, "small")
+        self._need(height + _LINE["small"] * (len(cap_lines) + 1))
+        ax = self.fig.add_axes([_MARGIN / _A4[0], (self.y - height) / _A4[1], width / _A4[0],
+                                height / _A4[1]])
+        ax.imshow(img, interpolation="lanczos")
+        ax.set_axis_off()
+        self.y -= height + 0.05
+        for ln in cap_lines:
+            self._text(_MARGIN, ln, "small", fontstyle="italic")
+            self.y -= _LINE["small"]
+        self.y -= _LINE["small"]
 
 
 def _hline(y: float, lw: float):
@@ -449,11 +485,11 @@ def _hline(y: float, lw: float):
     return Line2D([_MARGIN / _A4[0], 1 - _MARGIN / _A4[0]], [y / _A4[1]] * 2, lw=lw, color="0.3")
 
 
-def _check_rows(rows, with_joint):
+def _check_rows(rows, with_joint, notes=True):
     out, colors = [], []
     for joint, c in rows:
         sense = "≥" if c.sense == ">=" else "≤"
-        name = c.name + (f" ({c.note})" if c.note else "")
+        name = c.name + (f" ({c.note})" if c.note and notes else "")
         r = [name, format_number(c.value, c.unit), f"{sense} {format_number(c.limit, c.unit)}",
              format_margin(c.margin), verdict(c), c.reference]
         col = [None, None, None, None, "#075" if c.passed else "#b00", None]
@@ -484,15 +520,17 @@ def to_pdf(result: CaseResult | DesignCase | Report, path: str | os.PathLike | i
         w.table(None, [[k.capitalize(), t.get(k, "")] for k in
                            ("project", "part", "revision", "author", "date")]
                 + [["Program", f"fitcheck {rep.version}, generated {rep.generated}"]], [0.25, 0.75])
+        w.table(["Role", "Name", "Signature", "Date"],
+                [[r, "\n\n", "", ""] for r in SIGNATURE_ROLES], [0.25, 0.3, 0.3, 0.15])
         w.para("CAUTION. " + CAUTION, box=True, weight="bold", color="#840")
         w.para(DEFERENCE, box=True)
         w.heading("Summary")
         verdict_all = "all checks pass" if rep.ok else "at least one check FAILS"
         w.para(f"{len(rep.summary)} checks on {len(rep.sections)} joints: {verdict_all}.",
                weight="bold", color="#075" if rep.ok else "#b00")
-        rows, colors = _check_rows([(j, c) for j, _, c in rep.summary], True)
+        rows, colors = _check_rows([(j, c) for j, _, c in rep.summary], True, notes=False)
         w.table(["Joint", "Check", "Value", "Limit", "Margin", "Verdict", "Reference"], rows,
-                [0.14, 0.21, 0.11, 0.12, 0.08, 0.07, 0.27], "small", colors)
+                [0.16, 0.22, 0.11, 0.12, 0.1, 0.07, 0.22], "small", colors)
         w.heading("Shared conditions")
         if rep.conditions:
             w.table(["Key", "Value"], [list(kv) for kv in rep.conditions], [0.35, 0.65])
@@ -511,18 +549,20 @@ def to_pdf(result: CaseResult | DesignCase | Report, path: str | os.PathLike | i
             w.heading("Results", "h3")
             rows, colors = _check_rows([(s.label, c) for c in s.checks], False)
             w.table(["Check", "Value", "Limit", "Margin", "Verdict", "Reference"], rows,
-                    [0.27, 0.13, 0.14, 0.09, 0.08, 0.29], "small", colors)
+                    [0.27, 0.13, 0.14, 0.1, 0.08, 0.28], "small", colors)
             w.para(f"Verdict for {s.label}: {'all checks pass' if s.ok else 'a check FAILS'}",
                    weight="bold", color="#075" if s.ok else "#b00")
             for msg in s.warnings:
-                w.para("Warning: " + msg, "small")
+                w.para("Note: " + msg, "small")
             for msg in s.plot_errors:
                 w.para("Plot not drawn: " + msg, "small")
-            for cap, fig in s.figures:
-                w.figure_page(fig, f"{s.label}: {cap}")
-        w.heading("Review and signatures")
-        w.table(["Role", "Name", "Signature", "Date"],
-                [[r, "\n", "", ""] for r in SIGNATURE_ROLES], [0.2, 0.3, 0.3, 0.2])
+            if s.figures:
+                w.heading("Plots", "h3")
+            for n, (cap, fig) in enumerate(s.figures, 1):
+                w.image(fig, f"Figure {i}.{n}. {s.label}: {cap}")
+        w.heading("End of calculation")
+        w.para(f"{len(rep.summary)} checks on {len(rep.sections)} joints: {verdict_all}. "
+               "Signatures: see the title block on page 1.")
         w.para("CAUTION. " + CAUTION, box=True, weight="bold", color="#840")
         w.para(DEFERENCE, box=True)
         w.finish_page()
