@@ -1,0 +1,338 @@
+"""Fit search: the best ISO 286 fit class for one press-fit joint.
+
+For a joint (geometry, materials, loads, conditions) :func:`search_fits` takes
+every admitted hole-basis and shaft-basis combination that ISO 286 defines at
+the joint's size, evaluates all of them in **one** vectorised call of
+:func:`fitcheck.core.pressfit.evaluate` with the checks of
+:func:`fitcheck.pressfit.evaluate` (slip at the loosest fit, hub and shaft
+yield at the tightest, loosening speed, press-in force or hub heating limit),
+ranks the fits that pass and says why the nearest rejected ones fail.
+
+Admitted set (default)
+----------------------
+* hole basis: holes H6, H7, H8 with every shaft letter at IT5, IT6, IT7;
+* shaft basis: shafts h5, h6, h7 with every hole letter at IT6, IT7, IT8;
+
+each only where ISO 286-2 defines the class at the size; a fit reached from
+both bases (H7/h6) is listed once.
+
+Ranking
+-------
+Passing fits are ordered by the largest minimum slip safety (at the loosest
+fit) — all of them already meet the required yield safety — then preferred
+fits first (ANSI B4.2 list, :func:`fitcheck.fits.preferred_fits`), then the
+larger yield safety, then the designation. Rejected fits are ordered by their
+worst margin (the nearest to passing first) and carry the names and margins of
+the checks they fail.
+"""
+
+from __future__ import annotations
+
+import math
+import re
+from dataclasses import dataclass, field, fields
+
+import numpy as np
+
+from . import CAUTION, fits
+from .checks import Check
+from .core import pressfit as _core
+from .errors import InputError
+from .pressfit import REF_HEAT, REF_HUB, REF_PRESS, REF_SHAFT, REF_SLIP, REF_SPEED
+
+__all__ = ["Candidate", "SearchResult", "candidates", "search_fits"]
+
+DEFAULT_HOLES = ("H6", "H7", "H8")
+DEFAULT_SHAFT_GRADES = (5, 6, 7)
+DEFAULT_SHAFTS = ("h5", "h6", "h7")
+DEFAULT_HOLE_GRADES = (6, 7, 8)
+RPM = 2.0 * math.pi / 60.0
+_CLASS_RE = re.compile(r"^([A-Za-z]{1,2})(\d{1,2})$")
+
+#: The check names of fitcheck.pressfit, so that verdicts read the same.
+CHECK_NAMES = ("slip at loosest fit", "hub yield at tightest fit", "shaft yield at tightest fit",
+               "loosening speed", "hub heating temperature", "press-in force")
+
+
+def _grade(cls: str) -> int:
+    m = _CLASS_RE.match(cls)
+    return int(m.group(2)) if m else -99
+
+
+def candidates(nominal_mm: float, holes=DEFAULT_HOLES, shaft_grades=DEFAULT_SHAFT_GRADES,
+               shafts=DEFAULT_SHAFTS, hole_grades=DEFAULT_HOLE_GRADES) -> list[tuple[str, str, str]]:
+    """The admitted (hole, shaft, basis) combinations ISO 286 defines at ``nominal_mm``.
+
+    Parameters
+    ----------
+    nominal_mm : float
+        Nominal size [mm].
+    holes : sequence of str
+        Basis holes of the hole-basis set (``H6``, ``H7``, ``H8``).
+    shaft_grades : sequence of int
+        Grades of the mating shafts (every letter) in the hole-basis set.
+    shafts : sequence of str
+        Basis shafts of the shaft-basis set (``h5``, ``h6``, ``h7``).
+    hole_grades : sequence of int
+        Grades of the mating holes (every letter) in the shaft-basis set.
+
+    Returns
+    -------
+    list of (hole, shaft, basis)
+        ``basis`` is ``"hole"``, ``"shaft"`` or ``"hole+shaft"`` for a fit in both sets.
+
+    Examples
+    --------
+    >>> c = candidates(20.0)
+    >>> ("H7", "s6", "hole") in c, ("S7", "h6", "shaft") in c, ("H7", "h6", "hole+shaft") in c
+    (True, True, True)
+    """
+    d = float(nominal_mm)
+    shaft_ok = fits.valid_classes(d, "shaft")
+    hole_ok = fits.valid_classes(d, "hole")
+    out: dict[tuple[str, str], str] = {}
+    for h in holes:
+        if h not in hole_ok:
+            continue
+        for s in shaft_ok:
+            if _grade(s) in shaft_grades:
+                out[(h, s)] = "hole"
+    for s in shafts:
+        if s not in shaft_ok:
+            continue
+        for h in hole_ok:
+            if _grade(h) in hole_grades:
+                out[(h, s)] = "hole+shaft" if out.get((h, s)) == "hole" else "shaft"
+    return [(h, s, b) for (h, s), b in out.items()]
+
+
+@dataclass(frozen=True)
+class Candidate:
+    """One evaluated fit.
+
+    Deviations [µm], interferences [µm] (measured, before smoothing), pressures [MPa],
+    torque capacity [N·m], forces [N], temperatures [°C].
+    """
+
+    fit: str
+    hole: str
+    shaft: str
+    basis: str
+    preferred: bool
+    hole_upper_um: float
+    hole_lower_um: float
+    shaft_upper_um: float
+    shaft_lower_um: float
+    interference_min_um: float
+    interference_max_um: float
+    pressure_min: float
+    pressure_max: float
+    torque_capacity_min: float
+    slip_safety_min: float
+    hub_yield_safety: float
+    shaft_yield_safety: float
+    press_force_max: float
+    shrink_temperature: float
+    checks: tuple
+    rank: int = 0
+
+    @property
+    def ok(self) -> bool:
+        return bool(self.checks) and all(c.passed for c in self.checks)
+
+    @property
+    def failing(self) -> tuple:
+        """The failing checks as (name, margin)."""
+        return tuple((c.name, c.margin) for c in self.checks if not c.passed)
+
+    @property
+    def worst_margin(self) -> float:
+        return min(c.margin for c in self.checks)
+
+    def to_dict(self) -> dict:
+        d = {f.name: getattr(self, f.name) for f in fields(self) if f.name != "checks"}
+        d["ok"] = self.ok
+        d["checks"] = [c.to_dict() for c in self.checks]
+        d["failing"] = [{"name": n, "margin": m} for n, m in self.failing]
+        return d
+
+
+@dataclass(frozen=True)
+class SearchResult:
+    """Result of :func:`search_fits`: ranked passing fits and the nearest rejected ones."""
+
+    joint: str
+    nominal_mm: float
+    evaluated: int
+    passing: tuple          # Candidate, ranked (rank 1 = best)
+    rejected: tuple         # Candidate, nearest to passing first
+    admitted: dict          # the admitted set (holes, shaft_grades, shafts, hole_grades)
+    notes: tuple = ()
+    caution: str = field(default=CAUTION, repr=False)
+
+    @property
+    def best(self) -> Candidate | None:
+        return self.passing[0] if self.passing else None
+
+    @property
+    def ok(self) -> bool:
+        """True when at least one admitted fit passes every check."""
+        return bool(self.passing)
+
+    def to_json(self, top: int | None = None) -> dict:
+        k = len(self.passing) if top is None else top
+        return {"joint": self.joint, "nominal_mm": self.nominal_mm, "evaluated": self.evaluated,
+                "passing_count": len(self.passing), "rejected_count": len(self.rejected),
+                "passing": [c.to_dict() for c in self.passing[:k]],
+                "nearest_rejected": [c.to_dict() for c in self.rejected[:k]],
+                "admitted": {k2: list(v) for k2, v in self.admitted.items()},
+                "ok": self.ok, "notes": list(self.notes), "caution": self.caution}
+
+
+def _arrays(args: dict, hole_up, hole_lo, sh_up, sh_lo) -> dict:
+    kw = dict(args)
+    kw["interference_min"] = (sh_lo - hole_up) * 1e-3
+    kw["interference_max"] = (sh_up - hole_lo) * 1e-3
+    with np.errstate(all="ignore"):
+        return _core.evaluate(**kw)
+
+
+def _checks_for(i: int, r: dict, a: dict, shrink: bool, press_limit_given: bool) -> tuple[Check, ...]:
+    """The named checks of candidate ``i``, as :func:`fitcheck.pressfit.evaluate` builds them."""
+    hub_req = a["fracture_safety"] if a["brittle_hub"] else a["yield_safety"]
+    shaft_req = a["fracture_safety"] if a["brittle_shaft"] else a["yield_safety"]
+    p_min = float(r["p_min"][i])
+    out = [
+        Check(CHECK_NAMES[0], float(r["slip_safety_min"][i]) if p_min > 0 else 0.0, a["slip_safety"],
+              ">=", "", REF_SLIP, "" if p_min > 0 else "no contact pressure (clearance)"),
+        Check(CHECK_NAMES[1], float(r["hub_yield_safety"][i]), hub_req, ">=", "", REF_HUB),
+        Check(CHECK_NAMES[2], float(r["shaft_yield_safety"][i]), shaft_req, ">=", "", REF_SHAFT),
+        Check(CHECK_NAMES[3], float(r["loosening_speed"][i]) / RPM, a["omega"] / RPM, ">=", "rpm",
+              REF_SPEED),
+    ]
+    if shrink and math.isfinite(a["max_heating"]):
+        out.append(Check(CHECK_NAMES[4], float(r["shrink_temperature"][i]), a["max_heating"], "<=",
+                         "degC", REF_HEAT))
+    if press_limit_given and not shrink:
+        out.append(Check(CHECK_NAMES[5], float(r["press_force_max"][i]), a["press_force_limit"], "<=",
+                         "N", REF_PRESS))
+    return tuple(out)
+
+
+def search_fits(joint, *, holes=DEFAULT_HOLES, shaft_grades=DEFAULT_SHAFT_GRADES,
+                shafts=DEFAULT_SHAFTS, hole_grades=DEFAULT_HOLE_GRADES) -> SearchResult:
+    """Evaluate every admitted fit for a press-fit joint and rank those that pass.
+
+    Parameters
+    ----------
+    joint : fitcheck.pressfit.PressFitInput
+        The joint; its own fit (or interference) is replaced by each candidate, its diameter is
+        the nominal size.
+    holes, shaft_grades, shafts, hole_grades
+        The admitted set (see :func:`candidates`).
+
+    Returns
+    -------
+    SearchResult
+
+    Notes
+    -----
+    The checks are those of :func:`fitcheck.pressfit.evaluate` with the same required safeties;
+    each is decided on arrays over all candidates at once, and the named :class:`Check` objects
+    are then built per candidate from those arrays.
+
+    Examples
+    --------
+    >>> from fitcheck.pressfit import PressFitInput
+    >>> inp = PressFitInput.from_mapping({"fit": "20 H7/s6", "length": "16 mm",
+    ...     "hub_outer_diameter": "40 mm", "shaft_material": "C45E", "hub_material": "C45E",
+    ...     "torque": "20 N*m"})
+    >>> r = search_fits(inp)
+    >>> r.evaluated > 100, r.best.ok, r.best.slip_safety_min >= 1.5
+    (True, True, True)
+    """
+    from .study import core_arguments
+
+    a = core_arguments(joint)
+    d = a.pop("_nominal")
+    a.pop("_fit")
+    a.pop("interference_min")
+    a.pop("interference_max")
+    for name, seq in (("holes", holes), ("shafts", shafts)):
+        for c in seq:
+            if not isinstance(c, str) or not _CLASS_RE.match(c.strip()):
+                raise InputError(name, c, "tolerance classes such as 'H7' (holes) or 'h6' (shafts)")
+    for name, seq in (("shaft_grades", shaft_grades), ("hole_grades", hole_grades)):
+        for g in seq:
+            if isinstance(g, bool) or not isinstance(g, int) or not 1 <= g <= 18:
+                raise InputError(name, g, "tolerance grades, whole numbers from 1 to 18")
+    cands = candidates(d, holes, shaft_grades, shafts, hole_grades)
+    if not cands:
+        raise InputError("admitted set", f"{list(holes)} / {list(shafts)}",
+                         f"at least one hole/shaft combination ISO 286 defines at {d:g} mm")
+    hs = np.array([c[0] for c in cands])
+    ss = np.array([c[1] for c in cands])
+    h_up, h_lo, h_ok = fits.deviations(np.full(hs.shape, d), hs, "hole")
+    s_up, s_lo, s_ok = fits.deviations(np.full(ss.shape, d), ss, "shaft")
+    keep = h_ok & s_ok
+    r = _arrays(a, h_up[keep], h_lo[keep], s_up[keep], s_lo[keep])
+    n = int(np.count_nonzero(keep))
+    r = {k: np.broadcast_to(v, (n,)) for k, v in r.items()}
+    cands = [c for c, k in zip(cands, keep, strict=True) if k]
+    h_up, h_lo, s_up, s_lo = h_up[keep], h_lo[keep], s_up[keep], s_lo[keep]
+
+    shrink = bool(a["shrink"])
+    press_given = math.isfinite(a["press_force_limit"])
+    preferred = {p.fit for p in fits.preferred_fits()}
+
+    # verdicts on arrays (the same comparisons as the Check objects)
+    hub_req = a["fracture_safety"] if a["brittle_hub"] else a["yield_safety"]
+    shaft_req = a["fracture_safety"] if a["brittle_shaft"] else a["yield_safety"]
+    slip_v = np.where(r["p_min"] > 0, r["slip_safety_min"], 0.0)
+    ok = (slip_v >= a["slip_safety"]) & (r["hub_yield_safety"] >= hub_req) & \
+        (r["shaft_yield_safety"] >= shaft_req) & (r["loosening_speed"] / RPM >= a["omega"] / RPM)
+    if shrink and math.isfinite(a["max_heating"]):
+        ok &= r["shrink_temperature"] <= a["max_heating"]
+    if press_given and not shrink:
+        ok &= r["press_force_max"] <= a["press_force_limit"]
+
+    def make(i: int) -> Candidate:
+        h, s, b = cands[i]
+        return Candidate(
+            fit=f"{d:g} {h}/{s}", hole=h, shaft=s, basis=b, preferred=f"{h}/{s}" in preferred,
+            hole_upper_um=float(h_up[i]), hole_lower_um=float(h_lo[i]),
+            shaft_upper_um=float(s_up[i]), shaft_lower_um=float(s_lo[i]),
+            interference_min_um=float(s_lo[i] - h_up[i]), interference_max_um=float(s_up[i] - h_lo[i]),
+            pressure_min=float(r["p_min"][i]), pressure_max=float(r["p_max"][i]),
+            torque_capacity_min=float(r["torque_capacity_min"][i]) * 1e-3,
+            slip_safety_min=float(slip_v[i]), hub_yield_safety=float(r["hub_yield_safety"][i]),
+            shaft_yield_safety=float(r["shaft_yield_safety"][i]),
+            press_force_max=float(r["press_force_max"][i]),
+            shrink_temperature=float(r["shrink_temperature"][i]),
+            checks=_checks_for(i, r, a, shrink, press_given))
+
+    pas = np.flatnonzero(ok)
+    rej = np.flatnonzero(~ok)
+    yield_min = np.minimum(r["hub_yield_safety"] / hub_req, r["shaft_yield_safety"] / shaft_req)
+    names = [f"{h}/{s}" for h, s, _ in cands]
+    order = sorted(pas, key=lambda i: (-slip_v[i], names[i] not in preferred, -yield_min[i], names[i]))
+    passing = tuple(_ranked(make(i), k + 1) for k, i in enumerate(order))
+    rejected_all = [make(i) for i in rej]
+    rejected_all.sort(key=lambda c: (-c.worst_margin, not c.preferred, c.fit))
+    notes = []
+    if a["torque"] == 0 and a["axial_force"] == 0:
+        notes.append("no torque or axial force given: slip safety is infinite for every fit with "
+                     "contact pressure, so the ranking falls to preferred fits and yield safety")
+    if not passing:
+        notes.append("no admitted fit passes every check: see the nearest rejected fits")
+    return SearchResult(joint=joint.name, nominal_mm=d, evaluated=n, passing=passing,
+                        rejected=tuple(rejected_all),
+                        admitted={"holes": tuple(holes), "shaft_grades": tuple(shaft_grades),
+                                  "shafts": tuple(shafts), "hole_grades": tuple(hole_grades)},
+                        notes=tuple(notes))
+
+
+def _ranked(c: Candidate, rank: int) -> Candidate:
+    from dataclasses import replace
+
+    return replace(c, rank=rank)
