@@ -335,12 +335,18 @@ def from_document(data: Mapping, source: str = "case file") -> DesignCase:
             if name is not None and "name" in eng.load().KEYS:
                 mapping["name"] = name
             inherited = {k: v for k, v in conditions.items() if k in keys and k not in entry}
+            scope = [e for k, v in mapping.items() for e in _scope_errors(f"{label}.{k}", v)]
+            errs.errors.extend(scope)
             mapping = {**inherited, **mapping}
             try:
                 inp = cls.from_mapping(mapping, label)
             except (InputError, InputErrors) as exc:
+                flagged = {e.field for e in scope}
                 for e in exc.errors if isinstance(exc, InputErrors) else [exc]:
-                    errs.add(_blame_conditions(e, label, inherited))
+                    if e.field not in flagged:
+                        errs.add(_blame_conditions(e, label, inherited))
+                continue
+            if scope:
                 continue
             inputs[eng.attr].append(inp)
             got_names.append(name or f"{table}-{i + 1}")
@@ -421,6 +427,60 @@ def _read_conditions(c, engine_keys: Mapping[str, tuple[str, ...]], errs: ErrorC
         errs.add(InputError("conditions.temperature_min", c["temperature_min"],
                             f"a temperature ≤ temperature_max ({c['temperature_max']!r})"))
     return out
+
+
+#: Magnitudes no joint of a compact drive can have, in core units: a value outside is taken
+#: for a slip of the unit or the exponent, whatever the engine would make of it
+#: (common practice: the bounds are three or more orders of magnitude beyond any such drive).
+SCOPE_LIMITS: dict[str, tuple[str, float, float]] = {
+    "[length]": ("mm", 1e-6, 1e4),                      # 1 nm … 10 m (zero allowed)
+    "[mass] * [length] / [time] ** 2": ("N", 0.0, 1e8),  # force up to 100 MN
+    "[mass] * [length] ** 2 / [time] ** 2": ("N*mm", 0.0, 1e10),  # torque up to 10 MN·m
+    "[mass] / [length] / [time] ** 2": ("MPa", 0.0, 1e6),  # stress up to 1 TPa
+    "1 / [time]": ("rpm", 0.0, 1e6),
+    "[temperature]": ("degC", -273.15, 2000.0),
+}
+PLAIN_NUMBER_LIMIT = 1e9
+
+
+def _scope_errors(fld: str, v) -> list[InputError]:
+    """Values whose magnitude is absurd for a compact drive (units or exponent mixed up)."""
+    if isinstance(v, Mapping):
+        return [e for k, x in v.items() for e in _scope_errors(f"{fld}.{k}", x)]
+    if isinstance(v, list):
+        return [e for i, x in enumerate(v) for e in _scope_errors(f"{fld}[{i}]", x)]
+    if isinstance(v, bool):
+        return []
+    if isinstance(v, int | float):
+        if math.isfinite(v) and abs(v) > PLAIN_NUMBER_LIMIT:
+            return [InputError(fld, v, f"a number of magnitude ≤ {PLAIN_NUMBER_LIMIT:g}",
+                               "absurd for a compact drive: exponent mixed up?")]
+        return []
+    if not isinstance(v, str) or not v.strip()[:1].lstrip("+-.").isdigit():
+        return []
+    from .units import Q_
+
+    try:
+        q = Q_(v.strip())
+        spec = SCOPE_LIMITS.get(str(q.dimensionality))
+        if spec is None:
+            return []
+        unit, lo, hi = spec
+        x = float(q.to(unit).magnitude)
+    except Exception:  # text pint cannot read: the engine reports it with its own words
+        return []
+    if not math.isfinite(x):
+        return []
+    if unit == "degC":
+        bad = x > hi
+        allowed = f"a temperature ≤ {hi:g} degC"
+    else:
+        bad = abs(x) > hi or (lo > 0 and x != 0 and abs(x) < lo)
+        allowed = (f"a magnitude from {lo:g} to {hi:g} {unit}" if lo > 0 else
+                   f"a magnitude ≤ {hi:g} {unit}")
+    if bad:
+        return [InputError(fld, v, allowed, "absurd for a compact drive: unit or exponent mixed up?")]
+    return []
 
 
 def _blame_conditions(e: InputError, label: str, inherited: Mapping) -> InputError:

@@ -41,7 +41,7 @@ from collections.abc import Mapping
 
 __all__ = ["dumps", "format_key", "format_string", "format_value", "TomlWriteError"]
 
-_BARE_KEY = re.compile(r"^[A-Za-z0-9_-]+$")
+_BARE_KEY = re.compile(r"[A-Za-z0-9_-]+")
 _ESCAPES = {"\\": "\\\\", '"': '\\"', "\b": "\\b", "\t": "\\t", "\n": "\\n", "\f": "\\f", "\r": "\\r"}
 INLINE_MAX = 88  # longest inline table written on one line before a [sub.table] is used instead
 
@@ -77,7 +77,7 @@ def format_key(key: str) -> str:
     """
     if not isinstance(key, str):
         raise TomlWriteError(f"TOML keys are strings, got {key!r}")
-    return key if _BARE_KEY.match(key) else format_string(key)
+    return key if _BARE_KEY.fullmatch(key) else format_string(key)
 
 
 def _format_float(x: float) -> str:
