@@ -136,6 +136,7 @@ DEFAULTS = {  # core units
     "fracture_safety": 2.0,   # common practice for brittle hubs
 }
 ASSEMBLIES = ("press", "shrink")
+MAX_SIZE = 10_000.0       # [mm] plausibility bound of diameters and lengths — common practice
 _T_OP = (-100.0, 500.0)       # plausibility bounds of operating temperatures — common practice
 _T_ASM = (-200.0, 600.0)      # room temperature at assembly / cooled shaft — common practice
 
@@ -307,7 +308,7 @@ class PressFitInput:
             with errs.field(field):
                 v[key] = fn(mapping[key], key)
 
-        def length(lo=0.0, lo_open=True, hi=None):
+        def length(lo=0.0, lo_open=True, hi=MAX_SIZE):
             return lambda x, k: to_core(x, "length", k, lo=lo, lo_open=lo_open, hi=hi)
 
         def small(x, k, lo=None):
@@ -320,7 +321,7 @@ class PressFitInput:
         parse("interference_min", lambda x, k: small(x, k))
         parse("interference_max", lambda x, k: small(x, k))
         parse("diameter", length())
-        parse("length", length())
+        parse("length", length(lo=0.1, lo_open=False))  # common practice: at least 0.1 mm
         parse("shaft_bore", length(lo=0.0, lo_open=False))
         parse("hub_outer_diameter", length())
         parse("module", length())
@@ -333,8 +334,8 @@ class PressFitInput:
         parse("mu_slip", lambda x, k: number(x, k, lo=0.0, hi=1.0, lo_open=True))
         parse("mu_press", lambda x, k: number(x, k, lo=0.0, hi=1.0, lo_open=True))
         parse("assembly", lambda x, k: _assembly(x, k))
-        parse("torque", lambda x, k: to_core(x, "torque", k, lo=0.0))
-        parse("axial_force", lambda x, k: to_core(x, "force", k, lo=0.0))
+        parse("torque", lambda x, k: to_core(x, "torque", k, lo=0.0, hi=1e12))
+        parse("axial_force", lambda x, k: to_core(x, "force", k, lo=0.0, hi=1e10))
         parse("slip_safety", lambda x, k: number(x, k, lo=1.0, hi=20.0))
         parse("speed", lambda x, k: to_core(x, "speed", k, lo=0.0, hi=200_000 * RPM))
         for key in ("temperature_shaft", "temperature_hub"):
@@ -344,7 +345,7 @@ class PressFitInput:
         parse("joining_clearance", lambda x, k: small(x, k, lo=0.0))
         parse("yield_safety", lambda x, k: number(x, k, lo=1.0, hi=20.0))
         parse("fracture_safety", lambda x, k: number(x, k, lo=1.0, hi=20.0))
-        parse("press_force_limit", lambda x, k: to_core(x, "force", k, lo=0.0, lo_open=True))
+        parse("press_force_limit", lambda x, k: to_core(x, "force", k, lo=0.0, lo_open=True, hi=1e10))
 
         # ---- required keys and alternatives
         has_fit = "fit" in mapping
@@ -509,13 +510,13 @@ def _fit_limits(text):
 
 def _teeth(x, key):
     if isinstance(x, bool) or not isinstance(x, int | float | str):
-        raise InputError(key, x, "a whole number of teeth >= 6")
+        raise InputError(key, x, "a whole number of teeth, 6 … 10000")
     try:
         z = float(x)
     except ValueError:
-        raise InputError(key, x, "a whole number of teeth >= 6") from None
-    if not z.is_integer() or z < 6:
-        raise InputError(key, x, "a whole number of teeth >= 6")
+        raise InputError(key, x, "a whole number of teeth, 6 … 10000") from None
+    if not z.is_integer() or z < 6 or z > 10_000:
+        raise InputError(key, x, "a whole number of teeth, 6 … 10000")
     return int(z)
 
 

@@ -242,7 +242,9 @@ def test_keys_documented_with_units():
 @pytest.mark.parametrize("over,field,match", [
     ({"hub_outer_diameter": "20 mm"}, "hub_outer_diameter", "larger than the joint diameter"),
     ({"hub_outer_diameter": "15 mm"}, "hub_outer_diameter", "larger than the joint diameter"),
-    ({"length": "-3 mm"}, "length", "> 0 mm"),
+    ({"length": "-3 mm"}, "length", ">= 0.1 mm"),
+    ({"length": "1e30 mm"}, "length", "<= 10000 mm"),
+    ({"teeth": 420000000000, "hub_outer_diameter": None, "module": "1 mm"}, "teeth", "6 … 10000"),
     ({"length": "2 kg"}, "length", "a length"),
     ({"hub_material": "C45"}, "hub_material", "did you mean 'C45E'"),
     ({"shaft_material": {"base": "C45E", "nu": 0.5}}, "nu", "< 0.5"),
