@@ -409,9 +409,11 @@ class _PdfPages:
             self.y -= _LINE[style]
         self.y -= _LINE[style] * 0.2
 
-    def para(self, s: str, style: str = "body", box: bool = False, **kw):
+    def para(self, s: str, style: str = "body", box: bool = False, keep: bool = False, **kw):
         width = _A4[0] - 2 * _MARGIN - (0.2 if box else 0)
         lines = self.wrap(s, width, style, bold=kw.get("weight") == "bold")
+        if keep:
+            self._need(_LINE[style] * len(lines))
         for ln in lines:
             self._need(_LINE[style])
             self._text(_MARGIN + (0.1 if box else 0), ln, style, **kw)
@@ -522,8 +524,8 @@ def to_pdf(result: CaseResult | DesignCase | Report, path: str | os.PathLike | i
                 + [["Program", f"fitcheck {rep.version}, generated {rep.generated}"]], [0.25, 0.75])
         w.table(["Role", "Name", "Signature", "Date"],
                 [[r, "\n\n", "", ""] for r in SIGNATURE_ROLES], [0.25, 0.3, 0.3, 0.15])
-        w.para("CAUTION. " + CAUTION, box=True, weight="bold", color="#840")
-        w.para(DEFERENCE, box=True)
+        w.para("CAUTION. " + CAUTION, box=True, keep=True, weight="bold", color="#840")
+        w.para(DEFERENCE, box=True, keep=True)
         w.heading("Summary")
         verdict_all = "all checks pass" if rep.ok else "at least one check FAILS"
         w.para(f"{len(rep.summary)} checks on {len(rep.sections)} joints: {verdict_all}.",
@@ -563,8 +565,8 @@ def to_pdf(result: CaseResult | DesignCase | Report, path: str | os.PathLike | i
         w.heading("End of calculation")
         w.para(f"{len(rep.summary)} checks on {len(rep.sections)} joints: {verdict_all}. "
                "Signatures: see the title block on page 1.")
-        w.para("CAUTION. " + CAUTION, box=True, weight="bold", color="#840")
-        w.para(DEFERENCE, box=True)
+        w.para("CAUTION. " + CAUTION, box=True, keep=True, weight="bold", color="#840")
+        w.para(DEFERENCE, box=True, keep=True)
         w.finish_page()
 
 
