@@ -1,0 +1,136 @@
+"""``fitcheck search CASE.toml --joint NAME [--top K] [--json]``: the best ISO fit for a press fit.
+
+Evaluates every admitted hole-basis and shaft-basis fit at the joint's size (see
+:mod:`fitcheck.search`), prints the ranked passing fits and the nearest rejected
+ones with the checks they fail. Exit code 0 when at least one admitted fit
+passes, 1 when none does, 2 for bad input.
+"""
+
+from __future__ import annotations
+
+import sys
+
+from .. import CAUTION
+from ..errors import InputError
+from . import EXIT_FAILED_CHECK, EXIT_OK, print_json, print_table
+from .study import select_joint
+
+COMMAND = "search"
+HELP = "search the ISO 286 fits for a press fit: rank those that pass, say why others fail"
+
+
+def add_arguments(p) -> None:
+    p.add_argument("case", metavar="CASE", help="design-case file (TOML) with [[pressfit]] tables")
+    p.add_argument("--joint", metavar="NAME", help="name of the [[pressfit]] joint (needed when the "
+                   "file has more than one)")
+    p.add_argument("--top", default="10", metavar="K", help="how many ranked and rejected fits to "
+                   "show (default 10)")
+    p.add_argument("--holes", default="H6,H7,H8", metavar="LIST",
+                   help="basis holes of the hole-basis set (default H6,H7,H8)")
+    p.add_argument("--shaft-grades", default="5,6,7", metavar="LIST",
+                   help="grades of the shafts mated with them (default 5,6,7)")
+    p.add_argument("--shafts", default="h5,h6,h7", metavar="LIST",
+                   help="basis shafts of the shaft-basis set (default h5,h6,h7)")
+    p.add_argument("--hole-grades", default="6,7,8", metavar="LIST",
+                   help="grades of the holes mated with them (default 6,7,8)")
+    p.add_argument("--plot", metavar="FILE.png", help="also save the ranking chart as an image")
+    p.add_argument("--json", action="store_true", help="print the result as JSON")
+
+
+def _classes(text: str, option: str) -> tuple[str, ...]:
+    items = tuple(t.strip() for t in str(text).split(",") if t.strip())
+    return items
+
+
+def _grades(text: str, option: str) -> tuple[int, ...]:
+    out = []
+    for t in str(text).split(","):
+        t = t.strip().upper().removeprefix("IT")
+        if not t:
+            continue
+        if not t.isdigit():
+            raise InputError(option, text, "grades separated by commas, e.g. '5,6,7'")
+        out.append(int(t))
+    return tuple(out)
+
+
+def _top(text) -> int:
+    try:
+        k = int(str(text))
+    except ValueError:
+        raise InputError("--top", text, "a whole number from 1 to 500") from None
+    if not 1 <= k <= 500:
+        raise InputError("--top", text, "a whole number from 1 to 500")
+    return k
+
+
+def print_search(r, k: int, current: str | None = None, out=None) -> None:
+    """The text report of a :class:`~fitcheck.search.SearchResult`."""
+    out = out or sys.stdout
+    head = f"Fit search '{r.joint}' — {r.nominal_mm:g} mm"
+    out.write(f"{head}\n{'=' * len(head)}\n")
+    a = r.admitted
+    out.write(f"admitted: holes {', '.join(a['holes'])} with shafts IT{'/'.join(map(str, a['shaft_grades']))}; "
+              f"shafts {', '.join(a['shafts'])} with holes IT{'/'.join(map(str, a['hole_grades']))}; "
+              f"{r.evaluated} fits defined at this size, {len(r.passing)} pass every check\n\n")
+    if r.passing:
+        out.write("Ranked fits (largest minimum slip safety first; * preferred)\n")
+        rows = []
+        for c in r.passing[:k]:
+            rows.append([c.rank, f"{c.hole}/{c.shaft}" + ("*" if c.preferred else ""), c.basis,
+                         f"{c.interference_min_um:+g} … {c.interference_max_um:+g}",
+                         f"{c.slip_safety_min:.3g}", f"{c.hub_yield_safety:.3g}",
+                         f"{c.shaft_yield_safety:.3g}", f"{c.press_force_max / 1000:.3g}",
+                         f"{c.pressure_min:.3g} … {c.pressure_max:.3g}"])
+        print_table(["rank", "fit", "basis", "interference [um]", "slip safety", "hub safety",
+                     "shaft safety", "press force [kN]", "pressure [MPa]"], rows, out)
+    if r.rejected:
+        out.write("\nNearest rejected fits (failing checks and their margins)\n")
+        rows = []
+        for c in r.rejected[:k]:
+            why = "; ".join(f"{n} {m * 100:+.1f} %" for n, m in c.failing)
+            rows.append([f"{c.hole}/{c.shaft}" + ("*" if c.preferred else ""),
+                         f"{c.interference_min_um:+g} … {c.interference_max_um:+g}", why])
+        print_table(["fit", "interference [um]", "fails"], rows, out)
+    if current:
+        cur = current.split()[-1] if " " in current else current
+        found = [c for c in r.passing if f"{c.hole}/{c.shaft}" == cur]
+        if found:
+            out.write(f"\nthe joint's own fit {cur} ranks #{found[0].rank} of {len(r.passing)}\n")
+        else:
+            rej = [c for c in r.rejected if f"{c.hole}/{c.shaft}" == cur]
+            if rej:
+                why = "; ".join(f"{n} {m * 100:+.1f} %" for n, m in rej[0].failing)
+                out.write(f"\nthe joint's own fit {cur} fails: {why}\n")
+    for n in r.notes:
+        out.write(f"note: {n}\n")
+    out.write(f"\nCaution: {CAUTION}\n")
+
+
+def run(args) -> int:
+    from ..search import search_fits
+
+    inp, _dc = select_joint(args.case, args.joint, COMMAND)
+    k = _top(args.top)
+    r = search_fits(inp, holes=_classes(args.holes, "--holes"),
+                    shaft_grades=_grades(args.shaft_grades, "--shaft-grades"),
+                    shafts=_classes(args.shafts, "--shafts"),
+                    hole_grades=_grades(args.hole_grades, "--hole-grades"))
+    if args.plot:
+        import matplotlib.pyplot as plt
+
+        from ..plots.study import plot_search_ranking
+
+        fig = plot_search_ranking(r, top=k, rejected=min(k, 5))
+        try:
+            fig.savefig(args.plot, dpi=120)
+        except (OSError, ValueError) as exc:
+            raise InputError("--plot", args.plot, "a writable image path ending in .png, .pdf or .svg",
+                             str(exc)) from None
+        finally:
+            plt.close(fig)
+    if args.json:
+        print_json({**r.to_json(top=k), "joint_fit": inp.fit})
+    else:
+        print_search(r, k, inp.fit)
+    return EXIT_OK if r.ok else EXIT_FAILED_CHECK
