@@ -1,0 +1,118 @@
+"""The real app in headless Chromium (Playwright): what a designer does in a day, end to end.
+
+One Streamlit server serves the whole module (fixture ``server``); every test gets
+a fresh browser context, i.e. a new session. Values shown are compared with the
+library's own results.
+"""
+
+from __future__ import annotations
+
+import re
+import tomllib
+
+import pytest
+
+from fitcheck import case as casefile
+from fitcheck import fits, tomlwrite
+from fitcheck.ui import unitsys
+
+pytestmark = pytest.mark.browser
+
+FIRST = 30_000   # ms, the first render of a session
+AFTER = 20_000   # ms, a rerun
+
+
+def demo_result(table: str, name: str):
+    res = casefile.evaluate(casefile.demo_case())
+    return next(j.result for j in res.joints if j.table == table and j.name == name)
+
+
+def metric_value(pg, label: str) -> str:
+    box = pg.get_by_test_id("stMetric").filter(has=pg.get_by_test_id("stMetricLabel").get_by_text(
+        label, exact=True))
+    return box.get_by_test_id("stMetricValue").inner_text().strip()
+
+
+def open_page(pg, server, wait_idle, path: str = "") -> None:
+    pg.goto(f"{server}/{path}")
+    wait_idle(pg, FIRST)
+    pg.get_by_test_id("stMainBlockContainer").get_by_role("heading").first.wait_for(timeout=FIRST)
+
+
+def test_opens_on_the_demo_case(page, server, wait_idle):
+    open_page(page, server, wait_idle, "press-fit")
+    r = demo_result("pressfit", "gear-on-shaft")
+    assert page.get_by_role("heading", name="Press fit", exact=True).is_visible()
+    assert metric_value(page, "Torque capacity, loosest") == unitsys.show(
+        r.torque_capacity_min, "torque", "SI")
+    assert page.get_by_text("verify every result by test").first.is_visible()
+    assert "case=" not in page.url  # the demo keeps the address clean
+
+
+def test_changing_a_fit_updates_the_results(page, server, wait_idle):
+    open_page(page, server, wait_idle)  # the fit-limits page is the first page
+    box = page.get_by_role("textbox", name="Designation", exact=True)
+    box.fill("40 H7/g6")
+    box.press("Enter")
+    page.get_by_text("40 H7/g6 — clearance fit").wait_for(timeout=AFTER)
+    wait_idle(page, AFTER)
+    f = fits.fit("40 H7/g6")
+    assert metric_value(page, "Largest clearance") == unitsys.show(f.clearance_max_um,
+                                                                   "small_length", "SI")
+    assert "fit=" in page.url
+
+
+def test_a_reload_keeps_the_inputs(page, server, wait_idle):
+    open_page(page, server, wait_idle, "press-fit")
+    box = page.get_by_role("textbox", name="Torque", exact=True)
+    box.fill("2.5 N*m")
+    box.press("Enter")
+    page.wait_for_url(re.compile(r"case="), timeout=AFTER)
+    wait_idle(page, AFTER)
+    page.get_by_text("2.5 N·m").first.wait_for(timeout=AFTER)  # "Torque required"
+    page.reload()
+    wait_idle(page, FIRST)
+    box = page.get_by_role("textbox", name="Torque", exact=True)
+    box.wait_for(timeout=FIRST)
+    assert box.input_value() == "2.5 N*m"
+    assert metric_value(page, "Torque required") == "2.5 N·m"
+
+
+def test_the_unit_switch_changes_the_displayed_units(page, server, wait_idle):
+    open_page(page, server, wait_idle, "housing-screws")
+    r = demo_result("screws", "cover-screws")
+    assert metric_value(page, "Tightening torque M_A") == unitsys.show(r.tightening_torque,
+                                                                       "torque", "SI")
+    page.get_by_test_id("stSidebar").get_by_text("inch", exact=True).click()
+    page.get_by_text("lbf·in").first.wait_for(timeout=AFTER)
+    wait_idle(page, AFTER)
+    assert metric_value(page, "Tightening torque M_A") == unitsys.show(r.tightening_torque,
+                                                                       "torque", "inch")
+    assert metric_value(page, "Permissible preload F_M,zul").endswith("lbf")
+
+
+def test_a_case_upload_opens_the_case(page, server, wait_idle):
+    open_page(page, server, wait_idle, "case-file")
+    doc = tomllib.loads(casefile.demo_text())
+    doc["title"]["project"] = "Uploaded pump"
+    page.locator('input[type="file"]').set_input_files(files=[{
+        "name": "uploaded.toml", "mimeType": "application/toml",
+        "buffer": tomlwrite.dumps(doc).encode()}])
+    page.get_by_text("Opened uploaded.toml").wait_for(timeout=AFTER)
+    wait_idle(page, AFTER)
+    assert page.get_by_role("textbox", name="Project", exact=True).input_value() == "Uploaded pump"
+
+
+def test_the_report_downloads(page, server, wait_idle):
+    open_page(page, server, wait_idle, "case-file")
+    with page.expect_download(timeout=60_000) as dl:
+        page.get_by_role("button", name="Report as HTML").click()
+    html = open(dl.value.path(), encoding="utf-8").read()
+    assert dl.value.suggested_filename.endswith("-report.html")
+    assert "verify every result by test" in html
+    for name in ("gear-on-shaft", "A-side-6202", "cover-screws"):
+        assert name in html
+    with page.expect_download(timeout=60_000) as dl:
+        page.get_by_role("button", name="Download the case file (.toml)").click()
+    text = open(dl.value.path(), encoding="utf-8").read()
+    assert casefile.loads(text).title.project == casefile.demo_case().title.project
