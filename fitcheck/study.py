@@ -609,20 +609,23 @@ class StudyResult:
 
 def _summary(key, arr, limits) -> Distribution:
     label, unit, _, _ = QUANTITIES[key]
-    a = arr.astype(np.float64, copy=False)
-    finite = a[np.isfinite(a)]
+    fin = np.isfinite(arr)
+    finite = arr if bool(fin.all()) else arr[fin]
     if finite.size == 0:
         nan = math.nan
         return Distribution(key, label, unit, nan, nan, nan, nan, tuple((q, nan) for q in PERCENTILES),
                             (), (), limits)
-    qs = np.percentile(finite, PERCENTILES)
-    lo, hi = qs[0], qs[-1]
+    qs = np.percentile(finite, PERCENTILES).astype(np.float64)
+    lo, hi = float(qs[0]), float(qs[-1])
     if not hi > lo:
         lo, hi = lo - 0.5 * max(abs(lo), 1e-9), hi + 0.5 * max(abs(hi), 1e-9)
-    edges = np.linspace(lo, hi, 61)
-    counts, _ = np.histogram(np.clip(finite, lo, hi), bins=edges)
-    return Distribution(key, label, unit, float(finite.mean()), float(finite.std()),
-                        float(finite.min()), float(finite.max()),
+    nb = 60
+    edges = np.linspace(lo, hi, nb + 1)
+    # equal bins: the bin index by scaling (no sort); the tails go to the end bins
+    idx = np.floor((finite - np.float32(lo)) * np.float32(nb / (hi - lo)))
+    counts = np.bincount(np.clip(idx, 0, nb - 1).astype(np.intp), minlength=nb)
+    return Distribution(key, label, unit, float(finite.mean(dtype=np.float64)),
+                        float(finite.std(dtype=np.float64)), float(finite.min()), float(finite.max()),
                         tuple((float(q), float(v)) for q, v in zip(PERCENTILES, qs, strict=True)),
                         tuple(float(e) for e in edges), tuple(int(c) for c in counts), limits)
 
