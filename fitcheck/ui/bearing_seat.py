@@ -68,9 +68,9 @@ def render() -> None:
         if jr is None:
             st.info("Correct the inputs marked with the error sign to see the results.")
             return
-        _results(jr.result, system)
+        _results(jr.result, system, name)
         widgets.warnings_box(msgs)
-    _details(jr.result, system)
+    _details(jr.result, system, name)
 
 
 def _suggestion(name: str, entry: dict) -> None:
@@ -95,7 +95,7 @@ def _suggestion(name: str, entry: dict) -> None:
                       on_click=_use_suggested, args=(name, rec.shaft, rec.housing))
 
 
-def _results(r: bearings.BearingSeatResult, system: str) -> None:
+def _results(r: bearings.BearingSeatResult, system: str, name: str) -> None:
     widgets.verdict_banner(r.ok, min(r.checks, key=lambda c: c.margin) if r.checks else None,
                            system)
     st.subheader(f"{r.designation}: shaft {r.shaft_class}, housing {r.housing_class}")
@@ -112,14 +112,11 @@ def _results(r: bearings.BearingSeatResult, system: str) -> None:
     c[1].metric("Outer ring clearance", unitsys.show_range(r.housing_clearance_um, "small_length",
                                                            system),
                 help="ring in its housing bore, smallest … largest (negative: interference)")
-    try:
-        from fitcheck.plots.bearings import plot_clearance_budget
-    except ImportError:
-        return
-    widgets.figure(plot_clearance_budget(r))
+    joints.plot(TABLE, name, "fitcheck.plots.bearings:plot_clearance_budget",
+                "radial clearance from initial through fit-up and thermal to operating")
 
 
-def _details(r: bearings.BearingSeatResult, system: str) -> None:
+def _details(r: bearings.BearingSeatResult, system: str, name: str) -> None:
     um = lambda p: unitsys.show_range(p, "small_length", system)  # noqa: E731
     st.subheader("Checks")
     widgets.show_checks(r.checks, system, key=f"{PREFIX}.checks")

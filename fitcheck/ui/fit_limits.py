@@ -32,6 +32,14 @@ def _classes(size_mm: float, feature: str) -> list[str]:
     return fits.valid_classes(size_mm, feature)
 
 
+@st.cache_data(show_spinner=False, max_entries=64)
+def _zone_png(key: str, _f: fits.Fit) -> bytes:
+    """The zone diagram of a fit (cached by its designation and limits in ``key``)."""
+    from fitcheck.plots.fits import plot_fit
+
+    return widgets.png(plot_fit(_f))
+
+
 @st.cache_data(show_spinner=False)
 def _preferred() -> list[fits.PreferredFit]:
     return fits.preferred_fits()
@@ -209,11 +217,7 @@ def _show_fit(f: fits.Fit, system: str) -> None:
             f"{d['upper_in']:+.5f}", f"{d['lower_in']:+.5f}", f"{d['max_in']:.5f}",
             f"{d['min_in']:.5f}", f"{unitsys.magnitude(d['it_um'], 'small_length', 'inch'):.5f}"]
     st.dataframe(pd.DataFrame(table), hide_index=True, width="stretch", key="fl.limits")
-    try:
-        from fitcheck.plots.fits import plot_fit
-    except ImportError:
-        return
-    widgets.figure(plot_fit(f))
+    widgets.image(_zone_png(repr(f.to_dict()), f), "tolerance zones of hole and shaft")
 
 
 if __name__ == "__main__":

@@ -140,12 +140,12 @@ def render() -> None:
         return
     r = jr.result
     with right:
-        _summary(r, system)
+        _summary(r, system, name)
         widgets.warnings_box(msgs)
-    _details(r, system)
+    _details(r, system, name)
 
 
-def _summary(r: screws.ScrewJointResult, system: str) -> None:
+def _summary(r: screws.ScrewJointResult, system: str, name: str) -> None:
     widgets.verdict_banner(r.ok, min(r.checks, key=lambda c: c.margin) if r.checks else None,
                            system)
     st.subheader(f"{r.name or 'Joint'}: {r.thread} – {r.property_class}")
@@ -162,14 +162,11 @@ def _summary(r: screws.ScrewJointResult, system: str) -> None:
     c[1].metric("Largest preload αA·F_M,min", f(r.F_M_max))
     c[2].metric("Residual clamp load", f(r.F_KR_min),
                 help="least clamp load left in service at the smallest preload")
-    try:
-        from fitcheck.plots.screws import plot_joint_diagram
-    except ImportError:
-        return
-    widgets.figure(plot_joint_diagram(r))
+    joints.plot(TABLE, name, "fitcheck.plots.screws:plot_joint_diagram",
+                "joint diagram: screw and clamped-part force against elongation")
 
 
-def _details(r: screws.ScrewJointResult, system: str) -> None:
+def _details(r: screws.ScrewJointResult, system: str, name: str) -> None:
     st.subheader("Checks")
     widgets.show_checks(r.checks, system, key=f"{PREFIX}.checks")
     f = lambda x: unitsys.show(x, "force", system)  # noqa: E731

@@ -94,12 +94,12 @@ def render() -> None:
         return
     r = jr.result
     with right:
-        _summary(r, system)
+        _summary(r, system, name)
         widgets.warnings_box(msgs)
-    _details(r, system)
+    _details(r, system, name)
 
 
-def _summary(r: pressfit.PressFitResult, system: str) -> None:
+def _summary(r: pressfit.PressFitResult, system: str, name: str) -> None:
     widgets.verdict_banner(r.ok, min(r.checks, key=lambda c: c.margin) if r.checks else None,
                            system)
     st.subheader(f"{r.name or 'Joint'}: {r.fit or 'given interference'}, "
@@ -127,14 +127,11 @@ def _summary(r: pressfit.PressFitResult, system: str) -> None:
     c[1].metric("Shaft yield safety", unitsys.num(r.shaft_yield_safety, 3))
     c[2].metric("Loosening speed", unitsys.show(r.loosening_speed, "speed", system, digits=3),
                 help="speed at which the loosest fit loses all its pressure")
-    try:
-        from fitcheck.plots.pressfit import plot_capacity_band
-    except ImportError:
-        return
-    widgets.figure(plot_capacity_band(r))
+    joints.plot(TABLE, name, "fitcheck.plots.pressfit:plot_capacity_band",
+                "torque capacity across the tolerance band, with the required torque")
 
 
-def _details(r: pressfit.PressFitResult, system: str) -> None:
+def _details(r: pressfit.PressFitResult, system: str, name: str) -> None:
     st.subheader("Checks")
     widgets.show_checks(r.checks, system, key=f"{PREFIX}.checks")
     left, right = st.columns([1, 1], gap="large")
@@ -166,12 +163,9 @@ def _details(r: pressfit.PressFitResult, system: str) -> None:
             ("governing tight condition", r.governing_tight_condition),
         ], key=f"{PREFIX}.more")
     with right:
-        try:
-            from fitcheck.plots.pressfit import plot_wall_stresses
-        except ImportError:
-            return
         st.subheader("Stress through the wall")
-        widgets.figure(plot_wall_stresses(r))
+        joints.plot(TABLE, name, "fitcheck.plots.pressfit:plot_wall_stresses",
+                    "radial, hoop and von Mises stress through shaft and hub, tightest fit")
 
 
 def _show_case(value: float, kind: str, system: str) -> str:

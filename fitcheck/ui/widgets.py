@@ -46,6 +46,23 @@ def figure(fig) -> None:
         plt.close(fig)
 
 
+def png(fig, dpi: int = 130) -> bytes:
+    """A figure as PNG bytes; the figure is closed (for cached plots shown with :func:`image`)."""
+    import io
+
+    try:
+        buf = io.BytesIO()
+        fig.savefig(buf, format="png", dpi=dpi, bbox_inches="tight")
+        return buf.getvalue()
+    finally:
+        plt.close(fig)
+
+
+def image(data: bytes | None, alt: str) -> None:
+    if data:
+        st.image(data, width="stretch", alt=alt)
+
+
 def notice() -> None:
     msg = st.session_state.pop(state.NOTICE, None)
     if msg:
