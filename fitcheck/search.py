@@ -40,7 +40,8 @@ from .core import pressfit as _core
 from .errors import InputError
 from .pressfit import REF_HEAT, REF_HUB, REF_PRESS, REF_SHAFT, REF_SLIP, REF_SPEED
 
-__all__ = ["Candidate", "SearchResult", "candidates", "search_fits"]
+__all__ = ["BearingSearchResult", "Candidate", "SearchResult", "SeatCandidate", "candidates",
+           "search_bearing_seat", "search_fits"]
 
 DEFAULT_HOLES = ("H6", "H7", "H8")
 DEFAULT_SHAFT_GRADES = (5, 6, 7)
@@ -336,3 +337,177 @@ def _ranked(c: Candidate, rank: int) -> Candidate:
     from dataclasses import replace
 
     return replace(c, rank=rank)
+
+
+# --------------------------------------------------------------------------- bearing seats
+
+#: Default seat classes tried for a rolling bearing: shafts g … r at IT5/IT6 and housings
+#: G … P at IT6/IT7, the range of the usual seat recommendations (DIN 5425-1) — common practice.
+BEARING_SHAFT_LETTERS = ("g", "h", "j", "js", "k", "m", "n", "p", "r")
+BEARING_SHAFT_GRADES = (5, 6)
+BEARING_HOUSING_LETTERS = ("G", "H", "J", "JS", "K", "M", "N", "P")
+BEARING_HOUSING_GRADES = (6, 7)
+
+
+@dataclass(frozen=True)
+class SeatCandidate:
+    """One bearing-seat class tried with the other seat as given; ``checks`` from the bearing engine."""
+
+    seat: str               # "shaft" or "housing"
+    cls: str
+    shaft: str
+    housing: str
+    recommended: bool
+    operating_clearance_um: tuple
+    checks: tuple
+    grip_um: float          # effective interference of the rotating-load ring, loosest pairing
+    rank: int = 0
+
+    @property
+    def ok(self) -> bool:
+        return bool(self.checks) and all(c.passed for c in self.checks)
+
+    @property
+    def grips(self) -> bool:
+        """The ring under circumferential load keeps an interference at the loosest pairing."""
+        return self.grip_um > 0
+
+    @property
+    def failing(self) -> tuple:
+        return tuple((c.name, c.margin) for c in self.checks if not c.passed)
+
+    @property
+    def worst_margin(self) -> float:
+        return min(c.margin for c in self.checks) if self.checks else -math.inf
+
+    def to_dict(self) -> dict:
+        return {"seat": self.seat, "class": self.cls, "shaft": self.shaft, "housing": self.housing,
+                "recommended": self.recommended, "rank": self.rank, "ok": self.ok,
+                "grip_um": self.grip_um, "grips": self.grips,
+                "operating_clearance_um": list(self.operating_clearance_um),
+                "worst_margin": self.worst_margin,
+                "checks": [c.to_dict() for c in self.checks],
+                "failing": [{"name": n, "margin": m} for n, m in self.failing]}
+
+
+@dataclass(frozen=True)
+class BearingSearchResult:
+    """Shaft classes tried with the housing as given, and housing classes with the shaft as given."""
+
+    joint: str
+    designation: str
+    shaft_given: str
+    housing_given: str
+    shafts: tuple           # SeatCandidate, passing ranked first, then rejected (nearest first)
+    housings: tuple
+    notes: tuple = ()
+    caution: str = field(default=CAUTION, repr=False)
+
+    @property
+    def ok(self) -> bool:
+        return any(c.ok for c in self.shafts) and any(c.ok for c in self.housings)
+
+    def to_json(self, top: int | None = None) -> dict:
+        def part(items):
+            p = [c for c in items if c.ok]
+            r = [c for c in items if not c.ok]
+            k = len(items) if top is None else top
+            return {"passing": [c.to_dict() for c in p[:k]],
+                    "nearest_rejected": [c.to_dict() for c in r[:k]]}
+
+        return {"joint": self.joint, "designation": self.designation,
+                "shaft_given": self.shaft_given, "housing_given": self.housing_given,
+                "shaft_seat": part(self.shafts), "housing_seat": part(self.housings),
+                "ok": self.ok, "notes": list(self.notes), "caution": self.caution}
+
+
+def _finite_worst(c) -> float:
+    """The worst finite margin of the failing checks (a check against a zero limit has an
+    infinite margin and does not order candidates)."""
+    finite = [m for _, m in c.failing if math.isfinite(m)]
+    return min(finite) if finite else 0.0
+
+
+def _grip_um(load: str, r) -> float:
+    """Effective interference (after smoothing) of the ring under circumferential load at the
+    loosest pairing [µm]; <= 0 means that ring may creep (DIN 5425-1; DIN 7190-1:2017 smoothing)."""
+    pair = r.shaft_interference_effective_um if load == "rotating_inner" \
+        else r.housing_interference_effective_um
+    return float(pair[0])
+
+
+def search_bearing_seat(joint, *, shaft_letters=BEARING_SHAFT_LETTERS,
+                        shaft_grades=BEARING_SHAFT_GRADES, housing_letters=BEARING_HOUSING_LETTERS,
+                        housing_grades=BEARING_HOUSING_GRADES) -> BearingSearchResult:
+    """Try the shaft and housing classes of a rolling-bearing seat with all the engine's checks.
+
+    Each shaft class is evaluated with the housing class as given and each housing class with the
+    shaft class as given, by :func:`fitcheck.bearings.evaluate` (operating radial clearance at
+    the tightest pairing, hoop stresses, grip of the rotating-load ring, axial friction capacity),
+    plus the check that the ring under circumferential load is an interference fit at the loosest
+    pairing (:func:`_creep_check`).
+    The verdict of each class is the bearing engine's. The bearing engine evaluates one seat per
+    call, so this is a loop over a few dozen classes, not one vectorised call. Passing classes are
+    ranked: those whose ring under circumferential load keeps an interference at the loosest
+    pairing first (a loose one may creep, DIN 5425-1), ordered by the worst check margin (the most
+    robust first); then the others, the nearest to gripping first; on ties the recommended class
+    (DIN 5425-1 table of the bearing engine) first. Rejected classes follow: the fewest failing
+    checks first, then the smallest finite shortfall.
+
+    Parameters
+    ----------
+    joint : fitcheck.bearings.BearingSeatInput
+    shaft_letters, shaft_grades, housing_letters, housing_grades
+        The classes tried (only those ISO 286 defines at the bearing's bore / outside diameter).
+
+    Returns
+    -------
+    BearingSearchResult
+    """
+    import dataclasses
+    import warnings
+
+    from . import bearings
+
+    if not isinstance(joint, bearings.BearingSeatInput):
+        raise InputError("joint", type(joint).__name__, "a BearingSeatInput (fitcheck.bearings)")
+    b = bearings.bearing(joint.designation)
+    with warnings.catch_warnings():
+        warnings.simplefilter("ignore")
+        base = bearings.evaluate(joint)
+    shaft0, housing0 = base.shaft_class, base.housing_class
+    rec_s, rec_h = base.recommended_shaft, base.recommended_housing
+
+    def tried(size, letters, grades, feature):
+        ok = set(fits.valid_classes(size, feature))
+        return [f"{L}{g}" for L in letters for g in grades if f"{L}{g}" in ok]
+
+    def run(seat, classes):
+        out = []
+        for c in classes:
+            s, h = (c, housing0) if seat == "shaft" else (shaft0, c)
+            with warnings.catch_warnings():
+                warnings.simplefilter("ignore")
+                r = bearings.evaluate(dataclasses.replace(joint, shaft=s, housing=h))
+            out.append(SeatCandidate(seat, c, s, h, c == (rec_s if seat == "shaft" else rec_h),
+                                     tuple(r.operating_clearance_um), tuple(r.checks),
+                                     _grip_um(joint.load, r)))
+        good = sorted((c for c in out if c.ok),
+                      key=lambda c: (not c.grips, -c.worst_margin if c.grips else -c.grip_um,
+                                     not c.recommended, c.cls))
+        bad = sorted((c for c in out if not c.ok), key=lambda c: (len(c.failing), -_finite_worst(c),
+                                                                   c.cls))
+        return tuple(dataclasses.replace(c, rank=k + 1) for k, c in enumerate(good)) + tuple(bad)
+
+    shafts = run("shaft", tried(b.d, shaft_letters, shaft_grades, "shaft"))
+    housings = run("housing", tried(b.D, housing_letters, housing_grades, "hole"))
+    notes = ["each seat is varied with the other seat as given; the operating clearance depends on "
+             "both, so re-run with the chosen class to confirm"]
+    if not any(c.ok and c.grips for c in shafts + housings if
+               c.seat == ("shaft" if joint.load == "rotating_inner" else "housing")):
+        notes.append("no passing class keeps the ring under circumferential load an interference fit "
+                     "at the loosest pairing after smoothing: it may creep; finer seat roughness, "
+                     "a tighter tolerance class of the bearing, or selective pairing help")
+    return BearingSearchResult(joint=joint.name or joint.designation, designation=joint.designation,
+                               shaft_given=shaft0, housing_given=housing0, shafts=shafts,
+                               housings=housings, notes=tuple(notes))

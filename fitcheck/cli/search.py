@@ -1,13 +1,17 @@
-"""``fitcheck search CASE.toml --joint NAME [--top K] [--json]``: the best ISO fit for a press fit.
+"""``fitcheck search CASE.toml --joint NAME [--top K] [--json]``: the best ISO fit for a joint.
 
-Evaluates every admitted hole-basis and shaft-basis fit at the joint's size (see
-:mod:`fitcheck.search`), prints the ranked passing fits and the nearest rejected
-ones with the checks they fail. Exit code 0 when at least one admitted fit
-passes, 1 when none does, 2 for bad input.
+For a ``[[pressfit]]`` joint, evaluates every admitted hole-basis and shaft-basis
+fit at the joint's size (see :func:`fitcheck.search.search_fits`), prints the
+ranked passing fits and the nearest rejected ones with the checks they fail.
+For a ``[[bearing]]`` seat, tries the shaft classes with the housing as given and
+the housing classes with the shaft as given (:func:`fitcheck.search.search_bearing_seat`).
+Exit code 0 when at least one candidate passes (for a bearing: on both seats),
+1 when none does, 2 for bad input.
 """
 
 from __future__ import annotations
 
+import math
 import sys
 
 from .. import CAUTION
@@ -110,8 +114,10 @@ def print_search(r, k: int, current: str | None = None, out=None) -> None:
 def run(args) -> int:
     from ..search import search_fits
 
-    inp, _dc = select_joint(args.case, args.joint, COMMAND)
+    inp, _dc, table = select_joint(args.case, args.joint, COMMAND, ("pressfit", "bearing"))
     k = _top(args.top)
+    if table == "bearing":
+        return _run_bearing(inp, k, args)
     r = search_fits(inp, holes=_classes(args.holes, "--holes"),
                     shaft_grades=_grades(args.shaft_grades, "--shaft-grades"),
                     shafts=_classes(args.shafts, "--shafts"),
@@ -133,4 +139,45 @@ def run(args) -> int:
         print_json({**r.to_json(top=k), "joint_fit": inp.fit})
     else:
         print_search(r, k, inp.fit)
+    return EXIT_OK if r.ok else EXIT_FAILED_CHECK
+
+
+def print_bearing_search(r, k: int, out=None) -> None:
+    """The text report of a :class:`~fitcheck.search.BearingSearchResult`."""
+    out = out or sys.stdout
+    head = f"Seat search '{r.joint}' — bearing {r.designation} (given: shaft {r.shaft_given}, " \
+           f"housing {r.housing_given})"
+    out.write(f"{head}\n{'=' * len(head)}\n")
+    for label, items in (("Shaft classes (housing as given)", r.shafts),
+                         ("Housing classes (shaft as given)", r.housings)):
+        out.write(f"\n{label}\n")
+        rows = []
+        good = [c for c in items if c.ok][:k]
+        bad = [c for c in items if not c.ok][:k]
+        for c in good + bad:
+            why = "; ".join(f"{n} {m * 100:+.1f} %" for n, m in c.failing)
+            rows.append([c.rank if c.ok else "—", c.cls + ("*" if c.recommended else ""),
+                         f"{c.operating_clearance_um[0]:.3g} … {c.operating_clearance_um[1]:.3g}",
+                         f"{c.grip_um:+.3g}" + ("" if c.grips else " (may creep)"),
+                         f"{c.worst_margin * 100:+.1f} %" if math.isfinite(c.worst_margin) else "—",
+                         why or "pass"])
+        print_table(["rank", "class", "operating clearance [um]", "rotating ring grip [um]",
+                     "worst margin", "verdict"], rows, out)
+    out.write("(* recommended seat class of the bearing tables)\n")
+    for n in r.notes:
+        out.write(f"note: {n}\n")
+    out.write(f"\nCaution: {CAUTION}\n")
+
+
+def _run_bearing(inp, k: int, args) -> int:
+    from ..search import search_bearing_seat
+
+    if args.plot:
+        raise InputError("--plot", args.plot, "a press-fit joint (the ranking chart is drawn for "
+                         "press fits only)")
+    r = search_bearing_seat(inp)
+    if args.json:
+        print_json(r.to_json(top=k))
+    else:
+        print_bearing_search(r, k)
     return EXIT_OK if r.ok else EXIT_FAILED_CHECK

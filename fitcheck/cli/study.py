@@ -57,28 +57,35 @@ def add_arguments(p) -> None:
     p.add_argument("--json", action="store_true", help="print the result as JSON")
 
 
-def select_joint(path: str, name: str | None, command: str):
-    """The :class:`~fitcheck.pressfit.PressFitInput` named ``name`` in a case file, and the case."""
+def select_joint(path: str, name: str | None, command: str, kinds=("pressfit",)):
+    """The joint named ``name`` in a case file: ``(input, case, table)``.
+
+    ``kinds`` are the case-file tables the command works on (``"pressfit"``, ``"bearing"``);
+    an unknown name is an input error with a "did you mean".
+    """
     from .. import case as case_mod
 
     dc = case_mod.load(path)
-    joints = {getattr(inp, "name", ""): inp for inp in dc.pressfits}
-    others = [n for eng, n, _ in dc.joints() if eng.table != "pressfit"]
+    joints = {n: (inp, eng.table) for eng, n, inp in dc.joints() if eng.table in kinds}
+    others = [n for eng, n, _ in dc.joints() if eng.table not in kinds]
+    what = " or ".join(f"[[{k}]]" for k in kinds)
     if name is None:
         if len(joints) == 1:
-            return next(iter(joints.values())), dc
+            inp, table = next(iter(joints.values()))
+            return inp, dc, table
         if not joints:
-            raise InputError(path, "no [[pressfit]] table", f"a case with a [[pressfit]] joint for "
+            raise InputError(path, f"no {what} table", f"a case with a {what} joint for "
                              f"'fitcheck {command}'")
-        raise InputError("--joint", None, "one of the press fits: " + ", ".join(joints),
-                         "the file holds several; name one with --joint")
+        raise InputError("--joint", None, "one of: " + ", ".join(joints),
+                         "the file holds several joints; name one with --joint")
     if name not in joints:
         hint = did_you_mean(name, list(joints) + others)
         if name in others:
-            hint = f"'{name}' is not a press fit; 'fitcheck {command}' works on [[pressfit]] joints"
-        raise InputError("--joint", name, "the name of a [[pressfit]] joint: " + (", ".join(joints)
+            hint = f"'{name}' is not a {what} joint, which 'fitcheck {command}' works on"
+        raise InputError("--joint", name, f"the name of a {what} joint: " + (", ".join(joints)
                          or "(none in this file)"), hint)
-    return joints[name], dc
+    inp, table = joints[name]
+    return inp, dc, table
 
 
 def _settings(args, dc):
@@ -178,7 +185,7 @@ def print_study(r, out=None) -> None:
 def run(args) -> int:
     from ..study import run_study
 
-    inp, dc = select_joint(args.case, args.joint, COMMAND)
+    inp, dc, _table = select_joint(args.case, args.joint, COMMAND)
     st = _settings(args, dc)
     r = run_study(inp, st)
     if args.plot:
