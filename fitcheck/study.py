@@ -440,8 +440,10 @@ class _Model:
         """
         if self.dim == 0:
             return None
-        # friction does not enter the stresses: it is left at its median for yield
-        idx = [j for j, v in enumerate(self.random) if not (mode == "yield" and v.name == "mu_slip")]
+        # friction enters neither the stresses nor the loss of all pressure (slip without load):
+        # there it is left at its median
+        skip_mu = mode == "yield" or self.demand == 0
+        idx = [j for j, v in enumerate(self.random) if not (skip_mu and v.name == "mu_slip")]
         bounds = [self.random[j].marginal.bounds for j in idx]
         if not idx or not all(math.isfinite(lo) and math.isfinite(hi) for lo, hi in bounds):
             return None
@@ -655,8 +657,8 @@ def _failure_mode(name, definition, model: _Model, k: int, n: int, st: StudySett
     if reach is not None and reach > 0:
         # every input is bounded and no corner of the input box fails: g is monotone in each
         # input, so no sampled joint can fail
-        zero = rel.Estimate("bounds", 0.0, 0.0, 0.0, 0.0, 2 ** model.dim, 0, math.inf,
-                            "no combination of the input bounds fails")
+        zero = rel.Estimate("bounds", 0.0, 0.0, 0.0, 0.0, 0, 0, math.inf,
+                            "no combination of the input bounds fails (corners of the input box)")
         return FailureMode(name, definition, plain, None, None, zero,
                            f"{name} is out of reach: the worst corner of the bounded inputs keeps a "
                            f"margin g = {reach:.3g}, so P({name}) = 0 within the stated distributions")

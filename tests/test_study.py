@@ -284,3 +284,21 @@ def test_bad_joint_and_override_are_input_errors():
 def test_material_table_values_used():
     m = materials.get("C45E")
     assert (m.E, m.nu) == (210000.0, 0.3)  # the values _shigley_cp is given above
+
+
+def test_loss_of_pressure_without_load_exact_trapezoid():
+    # H7/n6 at 20 mm: ISO 286-2:2010 n6 over 18 up to 30 mm +28/+15 um (from memory); with no load,
+    # "slip" is the loss of all contact pressure, delta <= smoothing loss, delta trapezoidal
+    n6 = (28.0, 15.0)
+    assert (fits.zone(20, "n6").upper_um, fits.zone(20, "n6").lower_um) == n6
+    n = 200_000
+    r = run_study(_joint("20 H7/n6", torque="0 N*m"), samples=n, seed=13, **FIXED)
+    loss = 0.8 * (4.0 + 6.3)
+    w_h, w_s = H7[0] - H7[1], n6[0] - n6[1]
+    trap = stats.trapezoid(min(w_h, w_s) / (w_h + w_s), max(w_h, w_s) / (w_h + w_s),
+                           loc=n6[1] - H7[0], scale=w_h + w_s)
+    exact = trap.cdf(loss)
+    assert 0.05 < exact < 0.5
+    lo, hi = rel.clopper_pearson(r.slip.plain.failures, n, 0.999)
+    assert lo < exact < hi
+    assert r.slip.definition.startswith("no contact pressure")
