@@ -46,13 +46,13 @@ def figure(fig) -> None:
         plt.close(fig)
 
 
-def png(fig, dpi: int = 130) -> bytes:
+def png(fig, dpi: int = 120) -> bytes:
     """A figure as PNG bytes; the figure is closed (for cached plots shown with :func:`image`)."""
     import io
 
     try:
         buf = io.BytesIO()
-        fig.savefig(buf, format="png", dpi=dpi, bbox_inches="tight")
+        fig.savefig(buf, format="png", dpi=dpi)  # no bbox_inches="tight": it draws twice
         return buf.getvalue()
     finally:
         plt.close(fig)
