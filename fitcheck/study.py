@@ -115,7 +115,7 @@ class StudySettings:
         Samples of the importance-sampling estimate about the FORM design point (default 20 000;
         0 switches FORM and importance sampling off).
     chunk : int
-        Samples evaluated at once (default 200 000): bounds the memory.
+        Samples evaluated at once (default 100 000): bounds the memory.
     """
 
     samples: int = 100_000
@@ -383,8 +383,8 @@ class _Model:
         self.demand = math.hypot(2.0 * a["torque"] / a["d"], a["axial_force"])
 
     def values(self, u) -> dict:
-        """Physical values of every variable for standard-normal rows ``u`` (m, dim)."""
-        m = u.shape[0]
+        """Physical values of every variable for standard-normal rows ``u`` (m, dim); a fixed
+        input is a plain float."""
         out = {}
         j = 0
         for v in self.variables:
@@ -392,7 +392,7 @@ class _Model:
                 out[v.name] = v.marginal.from_u(u[:, j])
                 j += 1
             else:
-                out[v.name] = np.full(m, float(v.marginal.a))
+                out[v.name] = float(v.marginal.a)  # a scalar: the core broadcasts it
         return out
 
     def evaluate(self, u) -> tuple[dict, dict]:
@@ -456,8 +456,10 @@ class _Model:
 
     def g_fun(self, mode: str):
         def g(u):
-            r, x = self.evaluate(np.atleast_2d(u))
-            return self.g_slip(r, x) if mode == "slip" else self.g_yield(r)
+            u = np.atleast_2d(u)
+            r, x = self.evaluate(u)
+            val = self.g_slip(r, x) if mode == "slip" else self.g_yield(r)
+            return np.broadcast_to(val, (u.shape[0],))
         return g
 
 
@@ -746,9 +748,9 @@ def run_study(joint, settings: StudySettings | None = None, **overrides) -> Stud
             r, x = model.evaluate(u)
             for key, (_, _, src, scale) in QUANTITIES.items():
                 store[key][done:done + m] = np.broadcast_to(r[src], (m,)) * scale
-            k_slip += int(np.count_nonzero(model.g_slip(r, x) <= 0))
-            k_yield += int(np.count_nonzero(model.g_yield(r) <= 0))
-            k_ok += int(np.count_nonzero(_design_ok(r, model.args)))
+            k_slip += int(np.count_nonzero(np.broadcast_to(model.g_slip(r, x) <= 0, (m,))))
+            k_yield += int(np.count_nonzero(np.broadcast_to(model.g_yield(r) <= 0, (m,))))
+            k_ok += int(np.count_nonzero(np.broadcast_to(_design_ok(r, model.args), (m,))))
             done += m
 
     a = model.args

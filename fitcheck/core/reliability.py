@@ -45,7 +45,7 @@ import numpy as np
 from scipy import optimize, special, stats
 
 #: Default chunk of samples evaluated at once: bounds the memory of a study.
-DEFAULT_CHUNK = 200_000
+DEFAULT_CHUNK = 100_000
 
 #: Marginal kinds and the meaning of their parameters (a, b, c, d).
 KINDS = {
