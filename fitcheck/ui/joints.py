@@ -55,6 +55,11 @@ def _empty(description: str) -> str:
     return f"({d})" if d else "(not set)"
 
 
+def _empty_for(key: str, description: str) -> str:
+    inherited = _inherited(key)
+    return f"({inherited})" if inherited else _empty(description)
+
+
 def wkey(prefix: str, name: str, key: str) -> str:
     return f"{prefix}.{name}.{key}"
 
@@ -169,22 +174,35 @@ def draw_inputs(table: str, prefix: str, name: str, groups: Sequence[tuple[str, 
         st.error(widgets.error_text(e), icon=":material/error:")
 
 
+def _inherited(key: str) -> str | None:
+    """The value a joint takes from the case's [conditions] when it does not state its own."""
+    cond = state.doc().get("conditions", {})
+    if isinstance(cond, Mapping) and key in cond:
+        return f"from the case conditions: {widgets.as_text(cond[key])}"
+    return None
+
+
 def _draw(prefix: str, name: str, f: Field, description: str, error: InputError | None) -> None:
     k = wkey(prefix, name, f.key)
     lab = f.label or label_of(f.key)
+    inherited = _inherited(f.key)
+    if inherited:
+        description = f"{description} — left empty, the joint takes the shared condition"
     if f.material:
         opts = list(materials.names())
         if st.session_state.get(k) == AS_IN_FILE:
             opts = [AS_IN_FILE, *opts]
         widgets.choice_field(lab, k, ["", *opts] if st.session_state.get(k) == "" else opts,
-                             help=description, error=error, empty=_empty(description))
+                             help=description, error=error, empty=_empty_for(f.key, description))
     elif f.options:
         opts = list(f.options)
         if st.session_state.get(k, "") == "":
             opts = ["", *opts]
-        widgets.choice_field(lab, k, opts, help=description, error=error, empty=_empty(description))
+        widgets.choice_field(lab, k, opts, help=description, error=error,
+                             empty=_empty_for(f.key, description))
     else:
-        widgets.text_field(lab, k, help=description, error=error, placeholder=default_of(description))
+        widgets.text_field(lab, k, help=description, error=error,
+                           placeholder=inherited or default_of(description))
 
 
 def grouped(keys: Mapping[str, str], groups: Sequence[tuple[str, Sequence[str | Field]]],

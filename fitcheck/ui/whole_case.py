@@ -49,7 +49,12 @@ def render() -> None:
     failed = [c for c in checks if not c.passed]
     ok = bool(checks) and not failed and not problems
     worst = checks[0] if checks else None
-    widgets.verdict_banner(ok, worst, system)
+    if problems and not failed:
+        st.error(f"{len(problems)} joint(s) cannot be checked until their inputs are corrected: "
+                 + ", ".join(problems) + ". Of the others, every check holds.",
+                 icon=":material/cancel:")
+    else:
+        widgets.verdict_banner(ok, worst, system)
     c = st.columns(4)
     c[0].metric("Joints", n_joints)
     c[1].metric("Checks", len(checks))
