@@ -20,7 +20,8 @@ from . import EXIT_FAILED_CHECK, EXIT_OK, print_json, print_table
 from .study import select_joint
 
 COMMAND = "search"
-HELP = "search the ISO 286 fits for a press fit: rank those that pass, say why others fail"
+HELP = ("search the ISO 286 fits of a press fit (or the seat classes of a bearing): rank those "
+        "that pass, say why others fail")
 
 
 def add_arguments(p) -> None:

@@ -121,7 +121,7 @@ def _marginal_text(v) -> str:
     if m.kind == "normal":
         return f"normal mean {m.a:.4g}, sd {m.b:.3g}{u}"
     if m.kind == "truncnormal":
-        return f"normal mean {m.a:.4g}, sd {m.b:.3g}{u}, within {m.c:.4g} … {m.d:.4g}"
+        return f"normal μ {m.a:.4g}, σ {m.b:.3g}{u}, truncated to {m.c:.4g} … {m.d:.4g}"
     return f"lognormal median {m.a:.4g}, cov {m.b:.3g}"
 
 
