@@ -93,7 +93,12 @@ def test_heads_holes_washers():
 def test_factors_and_embedding():
     # VDI 2230-1:2015 Table A8: torque wrench, friction estimated: 1.6 … 2.0  # from memory
     assert threads.tightening_factor("torque wrench estimated friction")[:2] == (1.6, 2.0)
-    assert threads.tightening_factor("yield_controlled")[:2] == (1.0, 1.0)
+    # Table A8: yield- and angle-controlled 1.2 … 1.4, hydraulic tensioning 1.2 … 1.6, impact wrench
+    # with adjustment 2.5 … 4  # from memory
+    assert threads.tightening_factor("yield_controlled")[:2] == (1.2, 1.4)
+    assert threads.tightening_factor("angle_controlled")[:2] == (1.2, 1.4)
+    assert threads.tightening_factor("hydraulic_tensioning")[:2] == (1.2, 1.6)
+    assert threads.tightening_factor("impact_wrench_adjusted")[:2] == (2.5, 4.0)
     with pytest.raises(InputError, match="did you mean"):
         threads.tightening_factor("torque_wrench")
     # VDI 2230-1:2015 Table 5: Rz < 10, axial: thread 3, head 2.5, interface 1.5 um  # from memory
