@@ -111,7 +111,8 @@ METHOD_NOTES: list[tuple[str, str]] = [
      "load introduced inside the clamped parts; n = 1 under the head, smaller when introduced near the "
      "interface)", "VDI 2230-1:2015, 5.2.2 and 5.3.1, step R3"),
     ("Embedding fZ from Table 5 (thread + head/nut faces + inner interfaces, by roughness Rz and "
-     "load direction); FZ = fZ/(δS + δP)", "VDI 2230-1:2015, 5.4.2.1, Table 5, step R4"),
+     "load direction); FZ = fZ/(δS + δP). Table 5 is for compact steel parts: light-alloy, copper-alloy "
+     "and plastic parts settle more (a warning says so)", "VDI 2230-1:2015, 5.4.2.1, Table 5, step R4"),
     ("Change of preload with uniform temperature change from assembly to the cold and warm ends: "
      "ΔFth = (Σ αP,i·li − αS·lK)·ΔT/(δS + δP); moduli taken at room temperature",
      "VDI 2230-1:2015, 5.4.2.3, step R4"),
@@ -124,7 +125,8 @@ METHOD_NOTES: list[tuple[str, str]] = [
     ("Permissible assembly preload FM,zul = A0·ν·Rp0.2/√(1 + 3[3/2·d2/d0·(P/(π d2) + 1.155 μG,min)]²), "
      "d0 = dS; check FM,max ≤ FM,zul", "VDI 2230-1:2015, 5.5.1, step R7; Table A1"),
     ("Tightening torque MA = FM,zul·(0.16 P + 0.58 d2 μG,min + μK,min·DKm/2), DKm = (dw + dh)/2; the "
-     "preload this torque gives at the highest friction is reported; Shigley's T = K·F·d (K = 0.2) "
+     "(with a washer: the washer's hole); the preload this torque gives at the highest friction is "
+     "reported; Shigley's T = K·F·d (K = 0.2) "
      "as a cross-check", "VDI 2230-1:2015, step R13; ISO 16047; Shigley, 10th ed., eq. (8-27), Table 8-15"),
     ("Working stress: FS,max = FM,zul + Φ·FA + thermal gain; σred,B = √(σ² + 3(kτ·τ)²) with kτ = 0.5; "
      "yield safety Rp0.2/σred,B ≥ 1", "VDI 2230-1:2015, step R8"),
@@ -138,7 +140,8 @@ METHOD_NOTES: list[tuple[str, str]] = [
      "τB = 0.6·Rm for the screw (common practice); nuts of matching class (ISO 898-2) are not checked",
      "FED-STD-H28/2B, App. A; principle of VDI 2230-1:2015, step R11"),
     ("Fatigue: σa = Φ·FA/(2 As) (load cycling between 0 and FA) against σASV = 0.85·(150/d + 45) MPa "
-     "(rolled before heat treatment) or σASG = (2 − FSm/F0.2min)·σASV (rolled after); safety ≥ 1.2",
+     "(rolled before heat treatment) or σASG = (2 − FSm/F0.2min)·σASV, not below σASV (rolled after; "
+     "FSm = FM,zul − FZ + Φ·FA/2, the largest mean force in service); safety ≥ 1.2",
      "VDI 2230-1:2015, step R9"),
 ]
 
@@ -147,6 +150,7 @@ _STEEL_WASHER_ALPHA = 11.5e-6    # 1/K (common practice)
 _TAU_RATIO_SCREW = 0.6           # τB/Rm of screw steels (common practice; VDI 2230-1 Table A9 ~0.6)
 _FATIGUE_SAFETY = 1.2            # VDI 2230-1:2015, R9: SD ≥ 1.2
 _ENGAGEMENT_MARGIN = 1.0         # L must reach L_min itself (the screw's Rm·As already bounds it)
+_NON_STEEL_EMBEDDING = ("aluminium", "copper_alloy", "plastic", "magnesium")  # Table 5 is for steel
 
 
 @dataclass(frozen=True)
@@ -705,6 +709,18 @@ def _evaluate(inp: ScrewJointInput) -> ScrewJointResult:
                       stacklevel=3)
     if th.d > 40.0:
         warnings.warn("VDI 2230 fatigue limits are given for d ≤ 40 mm", MethodRangeWarning, stacklevel=3)
+    if inp.tightening in ("yield_controlled", "angle_controlled"):
+        warnings.warn("yield- or angle-controlled tightening: VDI 2230 sets the preload by the screw's yield "
+                      "point and designs for FM,min; this program's torque-based checks use FM,zul/αA with "
+                      "αA from Table A8 (safe for the clamp load) and do not check the preload beyond FM,zul",
+                      MethodRangeWarning, stacklevel=3)
+    soft = sorted({m.name for m in [la.material for la in inp.layers]
+                   + ([inp.housing_material] if tapped and inp.housing_material is not None else [])
+                   if m.group in _NON_STEEL_EMBEDDING})
+    if soft:
+        warnings.warn("embedding amounts of VDI 2230 Table 5 are for compact steel parts; "
+                      f"{', '.join(soft)} is not steel (light and copper alloys settle more, plastics "
+                      "creep): the embedding loss shown is a lower estimate", MethodRangeWarning, stacklevel=3)
 
     # --- stack of clamped parts (washer first, if any)
     t = [la.thickness for la in inp.layers]
@@ -783,7 +799,8 @@ def _evaluate(inp: ScrewJointInput) -> ScrewJointResult:
     ds = th.ds
     F_M_zul = float(core.permissible_assembly_preload(th.As, ds, th.d2, th.P, mu_G_min, pc.Rp02,
                                                       inp.utilisation))
-    D_Km = 0.5 * (hd.dw + dh)
+    # friction diameter of the head's own bearing face: on the washer (its hole) when there is one
+    D_Km = 0.5 * (hd.dw + (bearing_dh if inp.washer else dh))
     M_A = float(core.tightening_torque(F_M_zul, th.P, th.d2, mu_G_min, mu_K_min, D_Km))
     M_A_hi = float(core.tightening_torque(F_M_zul, th.P, th.d2, mu_G_max, mu_K_max, D_Km))
     F_at_mu_max = F_M_zul * M_A / M_A_hi
@@ -820,8 +837,10 @@ def _evaluate(inp: ScrewJointInput) -> ScrewJointResult:
     # --- fatigue (load cycling between 0 and F_A)
     sigma_a = phi * F_A / (2.0 * th.As)
     if inp.rolled_after_heat_treatment:
-        F_Sm = F_M_zul / alpha_A - F_Z + 0.5 * phi * F_A
-        sigma_AS = float(core.fatigue_limit_rolled_after(th.d, F_Sm, th.As * pc.Rp02))
+        # mean screw force at the largest preload in service (after embedding): the lower, safe limit
+        F_Sm = F_M_zul - F_Z + 0.5 * phi * F_A
+        sigma_AS = max(float(core.fatigue_limit_rolled_after(th.d, F_Sm, th.As * pc.Rp02)),
+                       float(core.fatigue_limit_rolled_before(th.d)))
     else:
         sigma_AS = float(core.fatigue_limit_rolled_before(th.d))
     S_D = sigma_AS / sigma_a if sigma_a > 0 else math.inf
