@@ -49,9 +49,9 @@ from .units import number, temperature_c, to_core
 
 __all__ = [
     "Bearing", "BearingSeatInput", "BearingSeatResult", "KEYS", "LOAD_CASES", "LOAD_LEVELS",
-    "CLEARANCE_GROUPS", "METHOD_NOTES", "RING_STEEL", "SeatRecommendation", "TOLERANCE_CLASSES",
+    "CLEARANCE_GROUPS", "METHOD_NOTES", "RING_MATERIAL", "SeatRecommendation", "TOLERANCE_CLASSES",
     "bearing", "bore_deviation", "designations", "evaluate", "load_level_from_ratio",
-    "outside_deviation", "radial_clearance", "recommend_seats",
+    "outside_deviation", "radial_clearance", "recommend_seats", "ring_material",
 ]
 
 DIMENSIONS_TABLE = "bearings_iso15.csv"
@@ -68,13 +68,8 @@ AXIAL_LOCATIONS = ("shoulder", "circlip", "none")
 #: Split of the load levels by P/C (DIN 5425-1, from memory): light ≤ 0.05 < normal ≤ 0.10 < heavy.
 LOAD_LEVEL_LIMITS = (0.05, 0.10)
 
-#: Through-hardened bearing steel 100Cr6 of the rings (used when data/materials.csv has no row).
-RING_STEEL = Material(
-    name="100Cr6", group="steel", E=208000.0, nu=0.3, alpha=11.5e-6, Rp02=1650.0, Rm=2000.0,
-    density=7.81e-9, max_heating_C=120.0,
-    source="ISO 683-17:2014 (100Cr6, through-hardened); E, nu, alpha: typical bearing-steel values "
-           "(from memory); max heating 120 degC for dimensionally stabilised rings (common practice)",
-)
+#: Name of the ring material in data/materials.csv (through-hardened rolling-bearing steel).
+RING_MATERIAL = "100Cr6"
 
 #: Defaults of the optional keys.
 DEFAULTS = {
@@ -82,7 +77,7 @@ DEFAULTS = {
     "rz_housing": 6.3,      # µm, fine-turned or reamed bore (common practice)
     "rz_ring": 1.6,         # µm, ground bore and outside diameter of a bearing ring (common practice)
     "temperature_assembly": 20.0,  # °C, reference temperature of ISO 286 sizes (ISO 1:2016)
-    "friction": 0.1,        # DIN 7190-1:2017, slip in longitudinal press fits, steel, oiled (from memory)
+    "friction": None,       # per seat from data/pressfit_friction.csv (DIN 7190-1:2017, press fit, oiled)
     "hoop_stress_limit": 175.0,  # MPa, ≈ 25 ksi for through-hardened rings (common practice, from memory)
 }
 
@@ -114,7 +109,8 @@ KEYS: dict[str, str] = {
     "axial_force": "axial force the bearing carries [force] (default 0)",
     "axial_location": "how the rings are located axially: 'shoulder', 'circlip' or 'none' (friction only)",
     "clearance_min": "smallest acceptable operating radial clearance [length] (default 0)",
-    "friction": "coefficient of friction of the seats for axial slip [-] (default 0.1)",
+    "friction": "coefficient of friction of both seats for axial slip [-] (default per seat: "
+                "data/pressfit_friction.csv, longitudinal press fit, oiled; steel 0.08, aluminium 0.05)",
     "hoop_stress_limit": "permissible hoop stress at the inner-ring bore [stress] (default 175 MPa)",
 }
 
@@ -468,11 +464,17 @@ def _resolve_level(load_level, load_ratio) -> str:
 
 # --------------------------------------------------------------------------- input
 
-def _ring_material() -> Material:
+def ring_material() -> Material:
+    """The material of the bearing rings: the ``100Cr6`` row of data/materials.csv.
+
+    >>> ring_material().E, ring_material().max_heating_C
+    (208000.0, 120.0)
+    """
     try:
-        return materials.get("100Cr6")
+        return materials.get(RING_MATERIAL)
     except InputError:
-        return RING_STEEL
+        raise tables.TableError(f"data/materials.csv has no row {RING_MATERIAL!r}, the bearing-ring "
+                                "steel the bearing-seat engine needs") from None
 
 
 def _material_mapping(m: Material):
@@ -534,7 +536,7 @@ class BearingSeatInput:
     axial_force: float = 0.0
     axial_location: str = "shoulder"
     clearance_min: float = 0.0
-    friction: float = DEFAULTS["friction"]
+    friction: float | None = DEFAULTS["friction"]
     hoop_stress_limit: float = DEFAULTS["hoop_stress_limit"]
 
     @classmethod
@@ -725,12 +727,17 @@ class BearingSeatResult:
     ring_temperature_reduction_um: float
     clearance_reduction_um: tuple[float, float]
     operating_clearance_um: tuple[float, float]
+    operating_clearance_mid_um: float
+    shaft_interference_mid_operating_um: float
+    housing_interference_mid_operating_um: float
     clearance_min_um: float
     smallest_passing_group: str | None
     axial_force_N: float
     axial_location: str
     axial_capacity_inner_N: float
     axial_capacity_outer_N: float
+    friction_inner: float
+    friction_outer: float
     temperature_assembly_C: float
     temperature_inner_C: float
     temperature_outer_C: float
@@ -793,7 +800,7 @@ def evaluate(inp: BearingSeatInput) -> BearingSeatResult:
     if isinstance(inp, Mapping):
         inp = BearingSeatInput.from_mapping(inp)
     b = bearing(inp.designation)
-    ring = _ring_material()
+    ring = ring_material()
     level = _resolve_level(inp.load_level, inp.load_ratio)
     group_h = housing_group(inp.housing_material)
     try:
@@ -827,15 +834,18 @@ def evaluate(inp: BearingSeatInput) -> BearingSeatResult:
     uo = np.array(core.fit_limits(out_dev[0], out_dev[1], zh.upper_um, zh.lower_um))
     s_i = core.smoothing_um(inp.rz_shaft, inp.rz_ring)
     s_o = core.smoothing_um(inp.rz_housing, inp.rz_ring)
-    ui_eff = ui - s_i
-    uo_eff = uo - s_o
+    # mid-tolerance pairing (every part at the middle of its tolerance) appended as a third entry
+    ui = np.append(ui, ui.mean())
+    uo = np.append(uo, uo.mean())
+    ui_eff = np.asarray(core.effective_interference_um(ui, s_i))
+    uo_eff = np.asarray(core.effective_interference_um(uo, s_o))
     m_s, m_h = inp.shaft_material, inp.housing_material
     dti = 1000.0 * core.thermal_interference_change(b.d, m_s.alpha, tsh, ring.alpha, ti, ta)
     dto = 1000.0 * core.thermal_interference_change(b.D, ring.alpha, to, m_h.alpha, th, ta)
     ui_op = ui_eff + dti
     uo_op = uo_eff + dto
 
-    # ring deformation (arrays: [min, max] at assembly, then at operating temperature)
+    # ring deformation (arrays: [min, max, mid] at assembly, then at operating temperature)
     d_ie, D_oe = core.equivalent_ring_diameters(b.d, b.D)
     if inp.housing_outer_diameter is not None:
         Dh = inp.housing_outer_diameter
@@ -851,10 +861,11 @@ def evaluate(inp: BearingSeatInput) -> BearingSeatResult:
     from .core.lame import hub_stresses
 
     _, hoop_h = hub_stresses(p_o, b.D, Dh, b.D / 2.0)
-    red = 1000.0 * (np.asarray(grow_i) + np.asarray(contr_o))    # [µm], [min_a, max_a, min_op, max_op]
+    red = 1000.0 * (np.asarray(grow_i) + np.asarray(contr_o))  # [µm]: min, max, mid (assembly); same (op)
     red_fit = red[:2]
     red_ring_t = 1000.0 * core.thermal_clearance_reduction(ring.alpha, ti, to, b.pitch_diameter)
-    red_op = red[2:] + red_ring_t
+    red_op = red[3:5] + red_ring_t
+    red_op_mid = red[5] + red_ring_t
     red_thermal = red_op - red_fit
 
     # clearance
@@ -878,17 +889,29 @@ def evaluate(inp: BearingSeatInput) -> BearingSeatResult:
                       "bearings; the clearance check is left out", MethodRangeWarning, stacklevel=2)
     after_fit = np.array([g0[0] - red_fit[1], g0[1] - red_fit[0]])
     operating = np.array([g0[0] - red_op[1], g0[1] - red_op[0]])
+    operating_mid = float(g0.mean() - red_op_mid)
 
     # axial retention by friction at the loosest operating pairing
-    cap_i = core.friction_capacity(float(np.asarray(p_i)[2]), b.d, b.B, inp.friction)
-    cap_o = core.friction_capacity(float(np.asarray(p_o)[2]), b.D, b.B, inp.friction)
+    held_by_friction = inp.axial_location == "none" and inp.axial_force > 0
+    mu_notes = notes if held_by_friction else []
+    mu_i, mu_o = ((inp.friction, inp.friction) if inp.friction is not None else
+                  (_seat_friction(m_s, ring, mu_notes), _seat_friction(ring, m_h, mu_notes)))
+    cap_i = core.friction_capacity(float(np.asarray(p_i)[3]), b.d, b.B, mu_i)
+    cap_o = core.friction_capacity(float(np.asarray(p_o)[3]), b.D, b.B, mu_o)
 
     checks: list[Check] = []
     if kind_dg:
         checks.append(Check(
             "operating radial clearance (tightest pairing)", float(operating[0]), inp.clearance_min,
             ">=", "um", "ISO 5753-1:2009, Table 1; Lamé ring deformation (Shigley eq. 3-56)",
-            f"group {group}; smallest group that stays above the limit: {smallest or 'none tabulated'}"))
+            f"group {group}, arithmetic worst case; at mid-tolerance {operating_mid:.1f} um; smallest "
+            f"group that stays above the limit in the worst case: {smallest or 'none tabulated'}"))
+        if operating[0] < inp.clearance_min:
+            notes.append(_worst_case_note(
+                group, smallest, inp.clearance_min, operating[0], operating_mid, red_op[1],
+                float(g0[0]), (shaft_cls, float(zs.upper_um), float(bore_dev[1])),
+                (housing_cls, float(zh.lower_um)) if np.asarray(contr_o)[4] > 0 else None,
+                b.d, red_op[1] - float(_clearance_min_below(b.d, smallest)) if smallest else None))
     hoop_max = float(np.max(hoop_i))
     checks.append(Check("hoop stress at the inner-ring bore", hoop_max, inp.hoop_stress_limit, "<=",
                         "MPa", "Lamé, Shigley eq. (3-58); limit: common practice for through-hardened rings"))
@@ -896,8 +919,8 @@ def evaluate(inp: BearingSeatInput) -> BearingSeatResult:
     if hoop_h_max > 0 and math.isfinite(m_h.Rp02):
         checks.append(Check("hoop stress at the housing bore", hoop_h_max, m_h.Rp02, "<=", "MPa",
                             "Lamé, Shigley eq. (3-58); limit: yield strength Rp0.2 of the housing"))
-    rotating = ("inner ring on shaft", ui_eff, ui_op) if inp.load == "rotating_inner" \
-        else ("outer ring in housing", uo_eff, uo_op)
+    rotating = ("inner ring on shaft", ui_eff, ui_op, s_i) if inp.load == "rotating_inner" \
+        else ("outer ring in housing", uo_eff, uo_op, s_o)
     if rotating[1][0] > 0:
         checks.append(Check(
             f"rotating-load ring keeps its grip at operating temperature ({rotating[0]})",
@@ -905,14 +928,23 @@ def evaluate(inp: BearingSeatInput) -> BearingSeatResult:
             "loosest pairing, effective interference after smoothing; a ring under circumferential load "
             "that loses its interference creeps"))
     else:
-        notes.append(f"the loosest pairing of the {rotating[0]} seat is not an interference after "
-                     "smoothing: the ring under circumferential load may creep; consider a tighter class "
-                     "or measure and pair the parts")
-    if inp.axial_location == "none" and inp.axial_force > 0:
-        for what, cap in (("inner ring on shaft", cap_i), ("outer ring in housing", cap_o)):
+        # the loosest pairing has no grip: hold at least the mid-tolerance pairing to an interference
+        checks.append(Check(
+            f"rotating-load ring is an interference fit at mid-tolerance ({rotating[0]})",
+            float(rotating[2][2]), 0.0, ">=", "um",
+            "DIN 5425-1 (ring under circumferential load: interference fit); DIN 7190-1:2017, 6.2, 6.4",
+            "every part at the middle of its tolerance, after smoothing, at operating temperature"))
+        notes.append(f"the loosest pairing of the {rotating[0]} seat has no interference left after "
+                     f"smoothing ({float(rotating[2][0]):.1f} um at operating temperature, smoothing "
+                     f"{float(rotating[3]):.1f} um); at mid-tolerance it is {float(rotating[2][2]):.1f} um. "
+                     "A ring under circumferential load without interference can creep and wear its "
+                     "seat: finer seat roughness, a tighter class (it also takes more clearance) or "
+                     "measured and paired parts help")
+    if held_by_friction:
+        for what, cap, mu in (("inner ring on shaft", cap_i, mu_i), ("outer ring in housing", cap_o, mu_o)):
             checks.append(Check(f"axial force held by friction ({what})", float(cap), inp.axial_force,
                                 ">=", "N", "DIN 7190-1:2017, 7 (mu p pi d B), loosest pairing",
-                                "no shoulder or retaining ring declared"))
+                                f"no shoulder or retaining ring declared; mu = {mu:g}"))
     if rec is not None and "auto" in (inp.shaft, inp.housing):
         notes.extend(rec.notes)
 
@@ -932,26 +964,80 @@ def evaluate(inp: BearingSeatInput) -> BearingSeatResult:
         thermal_change_inner_um=float(dti), thermal_change_outer_um=float(dto),
         shaft_interference_operating_um=_pair(ui_op), housing_interference_operating_um=_pair(uo_op),
         equivalent_inner_ring_diameter_mm=float(d_ie), equivalent_outer_ring_bore_mm=float(D_oe),
-        contact_pressure_inner_MPa=_pair(np.asarray(p_i)[2:]),
-        contact_pressure_outer_MPa=_pair(np.asarray(p_o)[2:]),
+        contact_pressure_inner_MPa=_pair(np.asarray(p_i)[3:5]),
+        contact_pressure_outer_MPa=_pair(np.asarray(p_o)[3:5]),
         ring_hoop_stress_max_MPa=hoop_max, housing_hoop_stress_max_MPa=hoop_h_max,
         clearance_group=group, initial_clearance_um=_pair(g0),
         fitup_reduction_um=_pair(red_fit), clearance_after_fitup_um=_pair(after_fit),
         thermal_reduction_um=_pair(red_thermal), ring_temperature_reduction_um=float(red_ring_t),
         clearance_reduction_um=_pair(red_op), operating_clearance_um=_pair(operating),
+        operating_clearance_mid_um=operating_mid,
+        shaft_interference_mid_operating_um=float(ui_op[2]),
+        housing_interference_mid_operating_um=float(uo_op[2]),
         clearance_min_um=inp.clearance_min, smallest_passing_group=smallest,
         axial_force_N=inp.axial_force, axial_location=inp.axial_location,
         axial_capacity_inner_N=float(cap_i), axial_capacity_outer_N=float(cap_o),
+        friction_inner=float(mu_i), friction_outer=float(mu_o),
         temperature_assembly_C=ta, temperature_inner_C=ti, temperature_outer_C=to,
         temperature_shaft_C=tsh, temperature_housing_C=th,
         notes=tuple(dict.fromkeys(notes)), checks=tuple(checks),
     )
 
 
+def _seat_friction(male: Material, female: Material, notes: list) -> float:
+    """Friction against axial slip of a pressed-in seat: data/pressfit_friction.csv (press, oiled).
+
+    Where the table has no value for the pair, its lowest press-fit value is used (on the safe side
+    for the axial capacity) and a note says so.
+    """
+    from .pressfit import _friction_rows, default_friction
+
+    row = default_friction(male.group, female.group, "press")
+    if row is not None:
+        return row[0]
+    low = min(r["mu_slip"] for r in _friction_rows() if r["assembly"] == "press")
+    notes.append(f"no tabulated friction for {male.name} in {female.name}: the lowest press-fit value "
+                 f"{low:g} of data/pressfit_friction.csv is used for the axial capacity (give 'friction')")
+    return low
+
+
+def _clearance_min_below(d: float, group: str) -> float:
+    """Smallest clearance [µm] of the group just below ``group`` at bore ``d`` (NaN for the first)."""
+    groups = _groups_at(d)
+    i = groups.index(group)
+    return radial_clearance(d, groups[i - 1])[0] if i > 0 else math.nan
+
+
+def _worst_case_note(group, smallest, limit, worst, mid, reduction, g_min, shaft, housing, d,
+                     below_short) -> str:
+    """Why the clearance check fails at the arithmetic worst case, and what passes."""
+    cls, upper, bore_lower = shaft
+    parts = [f"largest shaft ({cls} {upper:+g} um) in the smallest ring bore ({bore_lower:+g} um)"]
+    if housing is not None:
+        parts.append(f"smallest housing bore ({housing[0]} {housing[1]:+g} um) on the largest outer ring")
+    text = (f"group {group} fails only in the arithmetic worst case: {' and '.join(parts)}, with the "
+            f"smallest {group} clearance ({g_min:g} um); fit-up and temperature then take {reduction:.1f} um "
+            f"and leave {worst:.1f} um (limit {limit:g} um). With every part at mid-tolerance the operating "
+            f"clearance is {mid:.1f} um. ")
+    if smallest is None:
+        return text + ("No tabulated group keeps the limit in the worst case: a looser shaft or housing "
+                       "class, or measured and paired parts.")
+    text += f"Group {smallest} keeps at least {limit:g} um even in the worst case"
+    if below_short is not None and math.isfinite(below_short) and _groups_at(d).index(smallest) > 0:
+        prev = _groups_at(d)[_groups_at(d).index(smallest) - 1]
+        if prev != group:
+            text += f" ({prev} leaves {-below_short:.1f} um)"
+    return text + ("; otherwise a looser shaft class, or measured and paired parts. The worst case is "
+                   "rare, but a bearing run without clearance is preloaded and runs hot.")
+
+
 def summary_rows(result: BearingSeatResult) -> list[list[str]]:
     """Rows (quantity, min, max, unit) for a text table of the main results."""
+    def fmt(x, digits):
+        return f"{x:.{digits}f}" if math.isfinite(x) else "-"
+
     def pr(p, digits=1):
-        return [f"{p[0]:.{digits}f}", f"{p[1]:.{digits}f}"]
+        return [fmt(p[0], digits), fmt(p[1], digits)]
     return [
         ["bore deviation (ISO 492)", *pr(result.bore_deviation_um, 0), "um"],
         ["outside-diameter deviation (ISO 492)", *pr(result.outside_deviation_um, 0), "um"],
@@ -965,5 +1051,7 @@ def summary_rows(result: BearingSeatResult) -> list[list[str]]:
         [f"initial clearance {result.clearance_group}", *pr(result.initial_clearance_um, 0), "um"],
         ["clearance reduction (fit-up + thermal)", *pr(result.clearance_reduction_um), "um"],
         ["operating clearance", *pr(result.operating_clearance_um), "um"],
+        ["operating clearance, every part at mid-tolerance", fmt(result.operating_clearance_mid_um, 1),
+         "", "um"],
     ]
 

@@ -12,8 +12,9 @@ from fitcheck.bearings import BearingSeatInput, bearing, evaluate, recommend_sea
 from fitcheck.core import bearing as core
 from fitcheck.errors import InputError, InputErrors
 
-# An aluminium housing alloy held inline (data/materials.csv need not list it):
-# E 70 GPa, nu 0.33, alpha 23e-6/K — typical wrought aluminium, Shigley 10th ed., Table A-5 # from memory
+# An aluminium housing alloy held inline (the inline-material path; the tabulated housing alloy
+# EN AC-46000 is tested below): E 70 GPa, nu 0.33, alpha 23e-6/K — typical wrought aluminium,
+# Shigley 10th ed., Table A-5 # from memory
 ALU = {"name": "Al alloy", "group": "aluminium", "E": "70 GPa", "nu": 0.33, "alpha": "23e-6 1/K",
        "Rp02": "240 MPa", "Rm": "290 MPa", "density": "2700 kg/m**3"}
 
@@ -248,8 +249,20 @@ def test_axial_retention_by_friction():
     # DIN 7190-1:2017, 7: F = mu p pi d B at the loosest pairing
     r = seat(shaft="n6", housing="N7", axial_location="none", axial_force="50 N")
     p = r.contact_pressure_inner_MPa[0]
-    assert r.axial_capacity_inner_N == pytest.approx(0.1 * p * math.pi * 20 * 14)
+    # DIN 7190-1:2017, friction table: steel/steel longitudinal press fit, oiled, 0.08 # from memory
+    assert r.friction_inner == 0.08
+    assert r.axial_capacity_inner_N == pytest.approx(0.08 * p * math.pi * 20 * 14)
     assert not any(c.name.startswith("axial") for c in seat(axial_force="50 N").checks)
+    given = seat(shaft="n6", housing="N7", axial_location="none", axial_force="50 N", friction=0.1)
+    assert given.axial_capacity_inner_N == pytest.approx(0.1 * p * math.pi * 20 * 14)
+
+
+def test_seat_friction_follows_the_housing_material():
+    # DIN 7190-1:2017, friction table: steel/light alloy longitudinal press fit, oiled, 0.05 # from memory
+    r = seat(housing="P7", housing_material="EN AC-46000", axial_location="none", axial_force="50 N")
+    assert (r.friction_inner, r.friction_outer) == (0.08, 0.05)
+    p = r.contact_pressure_outer_MPa[0]
+    assert r.axial_capacity_outer_N == pytest.approx(0.05 * p * math.pi * 47 * 14)
 
 
 def test_angular_contact_warns_and_skips_clearance():
@@ -314,3 +327,67 @@ def test_all_problems_collected_with_field_names():
 def test_housing_diameter_must_exceed_D():
     with pytest.raises(InputError, match="larger than the bearing's D = 47"):
         BearingSeatInput.from_mapping({"designation": "6204", "housing_outer_diameter": "45 mm"})
+
+
+# --------------------------------------------------------------------------- review additions
+
+def test_ring_material_is_the_table_row():
+    from fitcheck import materials
+
+    ring = bearings.ring_material()
+    assert ring == materials.get("100Cr6")
+    # through-hardened bearing steel: E 208 GPa, nu 0.3, alpha 11.5e-6/K (typical values # from memory)
+    assert (ring.E, ring.nu, ring.alpha) == (208000.0, 0.3, pytest.approx(11.5e-6, rel=1e-12))
+    assert ring.max_heating_C == 120.0  # heating for mounting: about 120 degC at most # common practice
+
+
+def test_tabulated_aluminium_housing_alloy():
+    # EN AC-46000 (AlSi9Cu3(Fe) die casting) from data/materials.csv is a light-alloy housing:
+    # DIN 5425-1 rows for light alloy, one class tighter than steel (common practice)
+    r = seat(housing="auto", housing_material="EN AC-46000", temperature_inner="60 degC")
+    assert r.housing_group == "light_alloy" and r.housing_class == "J7"
+    # the warm housing opens its bore: 47 mm x (21.0 - 11.5)e-6/K x 40 K
+    assert r.thermal_change_outer_um == pytest.approx(-47 * (21.0 - 11.5) * 1e-6 * 40 * 1000, rel=1e-9)
+
+
+def test_smoothing_never_widens_a_clearance():
+    # DIN 7190-1:2017, 6.2: smoothing is lost interference; a seat with clearance has no contact,
+    # so its clearance stays as the tolerances give it (H7 0/+25 with the outer ring 0/-11 um)
+    r = seat()
+    assert r.housing_interference_effective_um == (-36.0, 0.0)
+    assert r.shaft_interference_effective_um[0] == 0.0   # 2 um interference < 3.28 um smoothing
+
+
+def test_worst_case_clearance_explained_with_passing_group():
+    """6204 k5/H7, group N: the arithmetic worst case loses all clearance; the note says why and what passes."""
+    r = seat()
+    d, d_ie, E_r, E_s = 20.0, 26.75, 208000.0, 210000.0
+
+    def growth_um(u_um):  # Shigley 10th ed., eq. (3-56) and the ring's bore-pressure growth, by hand
+        k = ((d_ie**2 + d**2) / (d_ie**2 - d**2) + 0.3) / E_r + (1 - 0.3) / E_s
+        p = u_um / 1000.0 / (d * k)
+        return 1000.0 * 2 * p * d**2 * d_ie / (E_r * (d_ie**2 - d**2))
+
+    smoothing = 0.8 * (2.5 + 1.6)                       # DIN 7190-1:2017, 6.2
+    worst = 5.0 - growth_um(21.0 - smoothing)           # ISO 5753-1 N over 18 up to 24 mm: 5 ... 20 # from memory
+    mid = 12.5 - growth_um((2.0 + 21.0) / 2 - smoothing)
+    assert r.operating_clearance_um[0] == pytest.approx(worst, rel=1e-9)
+    assert r.operating_clearance_mid_um == pytest.approx(mid, rel=1e-9)
+    assert worst < 0 < mid
+    # C3 (13 ... 28 um) misses by a fraction of a micrometre, C4 (20 ... 36 um) passes # from memory
+    assert 13.0 - growth_um(21.0 - smoothing) < 0 < 20.0 - growth_um(21.0 - smoothing)
+    assert r.smallest_passing_group == "C4"
+    note = next(n for n in r.notes if n.startswith("group N fails only in the arithmetic worst case"))
+    assert "k5 +11 um" in note and "-10 um" in note and "Group C4" in note and "C3 leaves -0.3 um" in note
+    assert f"{mid:.1f} um" in note
+    clearance = next(c for c in r.checks if c.name.startswith("operating radial clearance"))
+    assert not clearance.passed and "mid-tolerance" in clearance.note
+
+
+def test_loose_rotating_ring_fails_at_mid_tolerance():
+    # ISO 286-2:2010, h6 over 18 up to 30 mm: 0/-13 um # from memory; with the bore 0/-10 um the
+    # seat is -13 ... +10 um, -1.5 um at mid-tolerance: a ring under circumferential load creeps
+    r = seat(shaft="h6")
+    grip = next(c for c in r.checks if c.name.startswith("rotating-load ring is an interference fit"))
+    assert grip.value == pytest.approx(-1.5) and not grip.passed and not r.ok
+    assert any("can creep" in n for n in r.notes)

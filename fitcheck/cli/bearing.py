@@ -27,7 +27,7 @@ JSON_KEYS = (
     "shaft_interference_operating_um", "housing_interference_operating_um",
     "contact_pressure_inner_MPa", "contact_pressure_outer_MPa", "clearance_group",
     "initial_clearance_um", "fitup_reduction_um", "thermal_reduction_um", "clearance_reduction_um",
-    "operating_clearance_um", "smallest_passing_group", "ring_hoop_stress_max_MPa",
+    "operating_clearance_um", "operating_clearance_mid_um", "smallest_passing_group", "ring_hoop_stress_max_MPa",
     "housing_hoop_stress_max_MPa", "axial_capacity_inner_N", "axial_capacity_outer_N", "notes",
     "checks", "ok",
 )

@@ -98,6 +98,43 @@ def smoothing_um(rz_a_um, rz_b_um, factor=SMOOTHING_FACTOR):
     return _out(factor * (np.asarray(rz_a_um, dtype=float) + np.asarray(rz_b_um, dtype=float)))
 
 
+def effective_interference_um(u_um, smoothing):
+    """Interference left after smoothing; a seat with clearance keeps its clearance.
+
+    .. math:: U_{eff} = U - \\min\\left(G,\\ \\max(U, 0)\\right)
+
+    Parameters
+    ----------
+    u_um : float or ndarray
+        Interference from the tolerance limits [µm]; negative = clearance
+    smoothing : float or ndarray
+        Smoothing G of the two surfaces, :func:`smoothing_um` [µm]
+
+    Returns
+    -------
+    float or ndarray
+        Effective interference [µm].
+
+    Notes
+    -----
+    DIN 7190-1:2017, 6.2 subtracts the smoothing from the interference of a press fit. Peaks are
+    flattened only where the parts are pressed together, and no further than to bare contact: a
+    seat with clearance keeps its clearance (no contact, nothing is flattened) and an interference
+    smaller than G ends at zero, not at a clearance. Common practice for the clearance side; it
+    keeps the tightest case (smallest operating clearance, a cold light-alloy housing closing on
+    its ring) on the safe side.
+
+    Examples
+    --------
+    >>> effective_interference_um(21.0, 3.28), effective_interference_um(2.0, 3.28)
+    (17.72, 0.0)
+    >>> effective_interference_um(-36.0, 6.32)
+    -36.0
+    """
+    u = np.asarray(u_um, dtype=float)
+    return _out(u - np.minimum(np.asarray(smoothing, dtype=float), np.maximum(u, 0.0)))
+
+
 def thermal_interference_change(d, alpha_male, t_male, alpha_female, t_female, t_ref):
     """Change of a seat's interference when the parts leave the temperature they were fitted at.
 
