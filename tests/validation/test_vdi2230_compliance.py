@@ -84,3 +84,22 @@ def test_tan_phi_equations():
         0.362 + 0.032 * math.log(bl / 2) + 0.153 * math.log(y), rel=1e-12)
     assert float(core.tan_phi(20.0, 15.0, 30.0, True)) == pytest.approx(
         0.348 + 0.013 * math.log(bl) + 0.193 * math.log(y), rel=1e-12)
+
+
+@pytest.mark.parametrize("tapped", [False, True])
+def test_wide_plate_takes_y_at_the_limiting_diameter(tapped):
+    # VDI 2230-1:2015, 5.1.2.2: D_A,Gr = dw + w·lK·tan φ (w = 1 DSV, 2 ESV); for a plate without an
+    # outer edge this program takes y = D_A,Gr/dw, a fixed point of the tan φ equation (solved
+    # here independently with scipy.optimize.brentq)
+    from scipy.optimize import brentq
+
+    lK, dw = 14.0, 9.38
+    w = 2.0 if tapped else 1.0
+    bl = lK / dw
+
+    def tphi(y):
+        return (0.348 + 0.013 * math.log(bl) + 0.193 * math.log(y)) if tapped else \
+            (0.362 + 0.032 * math.log(bl / 2) + 0.153 * math.log(y))
+
+    y = brentq(lambda y: 1.0 + w * bl * tphi(y) - y, 1.0, 50.0)
+    assert float(core.tan_phi(lK, dw, math.inf, tapped)) == pytest.approx(tphi(y), rel=1e-9)
