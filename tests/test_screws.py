@@ -280,3 +280,16 @@ def test_warnings_for_methods_outside_the_tables():
     assert not any("Table 5" in w for w in steel.warnings)
     y = evaluate(joint(tightening="yield_controlled"))
     assert y.alpha_A == 1.4 and any("yield- or angle-controlled" in w for w in y.warnings)
+
+
+def test_cli_text_states_its_basis(cli, tmp_path):
+    p = tmp_path / "case.toml"
+    p.write_text(CASE)
+    code, out, err = cli("screws", str(p))
+    assert code == 0
+    # the designer sees the set point, αA and the friction range it rests on, the check notes and
+    # the method warnings once (in the text, not again on stderr)
+    assert "tightening torque MA (set point)" in out and "tightening factor αA" in out
+    assert "μG 0.1…0.16" in out and "service -20…90 °C" in out
+    assert "surface pressure under head: on EN AW-6082-T6" in out
+    assert "warning: embedding amounts" in out and "MethodRangeWarning" not in err

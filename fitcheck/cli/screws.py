@@ -4,10 +4,11 @@ from __future__ import annotations
 
 import math
 import sys
+import warnings
 from collections.abc import Mapping
 
 from .. import CAUTION
-from ..errors import ErrorCollector, InputError, InputErrors
+from ..errors import ErrorCollector, InputError, InputErrors, MethodRangeWarning
 from ..screws import KEYS, ScrewJointInput, evaluate
 from ..tomlread import read_toml
 from . import EXIT_FAILED_CHECK, EXIT_OK, print_json, print_table
@@ -55,29 +56,49 @@ def _f(v: float, digits: int = 4) -> str:
     return "–" if v is None or (isinstance(v, float) and not math.isfinite(v)) else f"{v:.{digits}g}"
 
 
+def _describe(inp: ScrewJointInput) -> str:
+    kind = "tapped into " + inp.housing_material.name if inp.joint == "tapped" and inp.housing_material \
+        else "through bolt with nut"
+    parts = " + ".join(f"{la.thickness:g} mm {la.material.name}" for la in inp.layers)
+    return f"{inp.count} × {inp.thread} {inp.property_class} {inp.head} head, {kind}; clamped: {parts}"
+
+
 def run(args) -> int:
     data = read_toml(args.case)
     inputs = load_inputs(data, args.case)
-    results = [evaluate(inp) for inp in inputs]
+    with warnings.catch_warnings():
+        # the method-range warnings travel with each result (r.warnings) and are printed below
+        warnings.simplefilter("ignore", MethodRangeWarning)
+        results = [evaluate(inp) for inp in inputs]
     ok = all(r.ok for r in results)
     if args.json:
         print_json({"joints": [r.to_dict() for r in results], "ok": ok, "caution": CAUTION})
         return EXIT_OK if ok else EXIT_FAILED_CHECK
     out = sys.stdout
-    for r in results:
+    for inp, r in zip(inputs, results, strict=True):
+        muG, muK = inp.mu_thread, inp.mu_head
+        method = inp.tightening if isinstance(inp.tightening, str) else "given"
         out.write(f"{r.name}: {r.thread} {r.property_class}  (VDI 2230 Part 1:2015)\n")
+        out.write(f"  {_describe(inp)}\n")
+        service = (f"service {inp.temperature_min:g}…{inp.temperature_max:g} °C"
+                   if inp.temperature_min != inp.temperature_max else "no temperature change")
+        out.write(f"  μG {muG[0]:g}…{muG[1]:g}, μK {muK[0]:g}…{muK[1]:g}; assembled at "
+                  f"{inp.temperature_assembly:g} °C, {service}\n\n")
         print_table(["quantity", "value", "unit"], [
+            ["tightening torque MA (set point)", _f(r.tightening_torque / 1000, 3), "N·m"],
+            ["  gives FM,zul at μ min / preload at μ max (friction only)", f"{_f(r.F_M_zul)} / {_f(r.preload_at_mu_max)}", "N"],
+            [f"  tightening factor αA ({method})", f"{r.alpha_A:g}", ""],
+            ["  smallest assembly preload FM,zul/αA", _f(r.F_M_zul / r.alpha_A), "N"],
+            [f"FM,zul (ν = {inp.utilisation:g}, μG = {muG[0]:g})", _f(r.F_M_zul), "N"],
+            ["FM,min needed / αA·FM,min needed", f"{_f(r.F_M_min)} / {_f(r.F_M_max)}", "N"],
+            ["Shigley T = 0.2·F·d (cross-check only)", _f(r.torque_shigley / 1000, 3), "N·m"],
             ["stress area As", _f(r.As), "mm²"],
             ["screw / clamp stiffness", f"{_f(r.screw_stiffness / 1000)} / {_f(r.clamp_stiffness / 1000)}", "kN/mm"],
-            ["load factor Φ (n)", f"{r.load_factor:.3f} ({r.load_introduction:g})", ""],
+            ["load factor Φ (load introduction n)", f"{r.load_factor:.3f} ({r.load_introduction:g})", ""],
             ["axial / transverse load per screw", f"{_f(r.F_A)} / {_f(r.F_Q)}", "N"],
             ["embedding loss FZ", _f(r.F_Z), "N"],
-            ["thermal change cold / warm", f"{_f(r.dF_th_cold)} / {_f(r.dF_th_warm)}", "N"],
-            ["FM,min required / αA·FM,min", f"{_f(r.F_M_min)} / {_f(r.F_M_max)}", "N"],
-            ["FM,zul (permissible, ν)", _f(r.F_M_zul), "N"],
-            ["tightening torque MA (at μmin)", _f(r.tightening_torque / 1000, 3), "N·m"],
-            ["preload at μmax with MA", _f(r.preload_at_mu_max), "N"],
-            ["Shigley T = 0.2·F·d (cross-check)", _f(r.torque_shigley / 1000, 3), "N·m"],
+            [f"preload change at {inp.temperature_min:g} / {inp.temperature_max:g} °C",
+             f"{_f(r.dF_th_cold)} / {_f(r.dF_th_warm)}", "N"],
             ["residual clamp load FKR,min", _f(r.F_KR_min), "N"],
             ["σred,B / yield safety", f"{_f(r.sigma_red_B)} / {r.yield_safety:.2f}", "MPa / –"],
             ["surface pressure / pG", f"{_f(r.surface_pressure)} / {_f(r.p_G)}", "MPa"],
@@ -88,6 +109,9 @@ def run(args) -> int:
         print_table(["check", "value", "limit", "unit", "verdict", "reference"], [
             [c.name, _f(c.value), f"{c.sense} {_f(c.limit)}", c.unit, "pass" if c.passed else "FAIL",
              c.reference] for c in r.checks])
+        for c in r.checks:
+            if c.note:
+                out.write(f"  {c.name}: {c.note}\n")
         for w in r.warnings:
             out.write(f"warning: {w}\n")
         out.write(f"=> {'all checks pass' if r.ok else 'A CHECK FAILS'}\n\n")
