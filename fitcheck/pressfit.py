@@ -816,8 +816,11 @@ def evaluate(inp: PressFitInput) -> PressFitResult:
               f"safety {hub_basis} at the hub bore"),
         Check("shaft yield at tightest fit", r["shaft_yield_safety"], shaft_req, ">=", "", REF_SHAFT,
               f"safety {shaft_basis}, shaft surface and bore/centre"),
-        Check("loosening speed", r["loosening_speed"] * rpm, w * rpm, ">=", "rpm", REF_SPEED,
-              "speed at which the loosest fit loses all contact pressure, against the operating speed"),
+        Check("loosening speed", r["loosening_speed"] * rpm if r["loosening_speed"] > 0 else math.nan,
+              w * rpm, ">=", "rpm", REF_SPEED,
+              "speed at which the loosest fit loses all contact pressure, against the operating speed"
+              if r["loosening_speed"] > 0 else
+              "the loosest fit has no contact pressure at operating temperature even at standstill"),
     ]
     warns: list[str] = []
     if shrink:

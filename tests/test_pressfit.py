@@ -64,6 +64,11 @@ def test_clearance_gives_zero_pressure_and_failed_slip():
     assert r.torque_capacity_min == 0.0 and r.axial_capacity_min == 0.0
     slip = next(c for c in r.checks if c.name == "slip at loosest fit")
     assert not slip.passed and slip.value == 0.0
+    # no contact pressure even at standstill: the loosening-speed check fails too, it does not
+    # pass as "0 rpm >= 0 rpm"
+    speed = next(c for c in r.checks if c.name == "loosening speed")
+    assert not speed.passed and "no contact pressure" in speed.note
+    assert r.loosening_speed == 0.0
     assert not r.ok
 
 

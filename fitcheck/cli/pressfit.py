@@ -70,7 +70,8 @@ def _g(x, digits=4) -> str:
 def _print_joint(r, out) -> None:
     head = f"Press fit '{r.name}'" + (f" — {r.fit}" if r.fit else "")
     out.write(f"\n{head}\n{'=' * len(head)}\n")
-    out.write(f"d = {_g(r.diameter)} mm, L = {_g(r.length)} mm, shaft bore {_g(r.shaft_bore)} mm, "
+    bore = f"hollow shaft, bore {_g(r.shaft_bore)} mm" if r.shaft_bore > 0 else "solid shaft"
+    out.write(f"d = {_g(r.diameter)} mm, L = {_g(r.length)} mm, {bore}, "
               f"hub Do = {_g(r.hub_outer_diameter)} mm ({r.hub_outer_rule})\n")
     out.write(f"shaft {r.shaft_material.name}, hub {r.hub_material.name}; assembly: {r.assembly}; "
               f"mu_slip {_g(r.mu_slip)}, mu_press {_g(r.mu_press)} ({r.friction_source})\n")
@@ -90,13 +91,17 @@ def _print_joint(r, out) -> None:
         ["shaft yield safety (tightest)", _g(r.shaft_yield_safety), ""],
         ["hub outer diameter growth", _g(r.hub_outer_growth_max * 1e3), "um"],
         ["press-in force (tightest, mu_press)", _g(r.press_force_max / 1e3), "kN"],
-        ["hub temperature for shrinking", _g(r.shrink_temperature_C), "degC"],
+        ["hub temperature for shrinking" + ("" if r.assembly == "shrink" else " (if shrunk instead)"),
+         _g(r.shrink_temperature_C), "degC"],
         ["loosening speed (loosest)", _g(r.loosening_speed_rpm), "rpm"],
     ], out)
     out.write("\n")
     rows = [[c.name, f"{_g(c.value)} {c.unit}".strip(), f"{c.sense} {_g(c.limit)} {c.unit}".strip(),
              "pass" if c.passed else "FAIL", c.reference] for c in r.checks]
     print_table(["check", "value", "limit", "verdict", "reference"], rows, out)
+    for c in r.checks:
+        if not c.passed and c.note:
+            out.write(f"{c.name} fails: {c.note}\n")
     for w in r.warnings:
         out.write(f"caution: {w}\n")
     out.write(f"verdict: {'all checks pass' if r.ok else 'a check fails'}\n")

@@ -202,3 +202,44 @@ def test_thin_ring_rotating_hoop_stress():
     rho, omega, r = 7.85e-9, 1000.0, 100.0
     st = lame.rotating_disc_stresses(rho, omega, 0.3, 2 * r * (1 - 1e-5), 2 * r * (1 + 1e-5), r)[1]
     assert st == pytest.approx(rho * omega**2 * r**2, rel=1e-4)
+
+
+# ---- the whole-joint kernel at speed, against the same independent solution -----------------
+
+@pytest.mark.parametrize("delta,d,di,Do,shaft,hub", GEOMETRIES[:4])
+def test_joint_kernel_stresses_at_speed_match_numerical_solution(delta, d, di, Do, shaft, hub):
+    from fitcheck.core.pressfit import evaluate
+
+    omega = 1500.0  # rad/s
+    di_eff = di if di > 0 else 1e-4 * d  # the numerical model's pin-hole (module docstring)
+    r = evaluate(interference_min=delta, interference_max=delta, d=d, L=20.0, di=di_eff, Do=Do,
+                 Es=shaft[0], nus=shaft[1], rhos=shaft[2], Rps=1e4, Eh=hub[0], nuh=hub[1],
+                 rhoh=hub[2], Rph=1e4, mu_slip=0.1, smoothing=0.0, omega=omega)
+    # independent solution: scipy.integrate.solve_bvp, at standstill and at speed; the kernel
+    # reports the tighter of the two (von Mises at the hub bore) and the shaft's largest
+    vm_hub, vm_shaft = [], []
+    for w in (0.0, omega):
+        _, shaft_at, hub_at = _solve_fit(delta, d, di, Do, shaft, hub, omega=w)
+        sr, st, _ = hub_at(np.array([d / 2]))
+        vm_hub.append(float(np.sqrt(sr[0] ** 2 + st[0] ** 2 - sr[0] * st[0])))
+        if di > 0:  # the pin-hole of a 'solid' shaft carries a stress concentration: hollow only
+            sr, st, _ = shaft_at(np.array([di / 2, d / 2]))
+            vm_shaft.append(float(np.max(np.sqrt(sr**2 + st**2 - sr * st))))
+    assert float(r["hub_stress_max"]) == pytest.approx(max(vm_hub), rel=1e-6)
+    if di > 0:
+        assert float(r["shaft_stress_max"]) == pytest.approx(max(vm_shaft), rel=1e-6)
+    p_num_op = _solve_fit(delta, d, di, Do, shaft, hub, omega=omega)[0]
+    assert float(r["p_min_op"]) == pytest.approx(p_num_op, rel=1e-6)
+
+
+@pytest.mark.parametrize("delta,d,di,Do,shaft,hub", GEOMETRIES[:4])
+def test_loosening_speed_zeroes_the_numerical_pressure(delta, d, di, Do, shaft, hub):
+    di_eff = di if di > 0 else 1e-4 * d
+    w = lame.loosening_speed(delta, d, di_eff, Do, shaft[0], shaft[1], shaft[2], hub[0], hub[1], hub[2])
+    p0 = _solve_fit(delta, d, di, Do, shaft, hub)[0]
+    # independent solution: scipy.integrate.solve_bvp with the centrifugal body force at the
+    # speed the closed form names: the contact pressure is zero there (linear, may go negative)
+    p_w = _solve_fit(delta, d, di, Do, shaft, hub, omega=w)[0]
+    assert abs(p_w) <= 1e-6 * p0
+    p_below = _solve_fit(delta, d, di, Do, shaft, hub, omega=0.9 * w)[0]
+    assert p_below == pytest.approx(p0 * (1 - 0.81), rel=1e-5)  # the loss grows with omega²
