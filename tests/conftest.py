@@ -2,8 +2,13 @@ import logging
 import os
 
 import pytest
+from hypothesis import HealthCheck, settings
 
 os.environ.setdefault("MPLBACKEND", "Agg")
+
+# The suite runs on small shared machines: judge properties by their outcome, never by the clock.
+settings.register_profile("fitcheck", deadline=None, suppress_health_check=[HealthCheck.too_slow])
+settings.load_profile("fitcheck")
 logging.getLogger("streamlit.runtime.scriptrunner_utils.script_run_context").setLevel(logging.ERROR)
 logging.getLogger("streamlit.runtime.caching.cache_data_api").setLevel(logging.ERROR)
 
