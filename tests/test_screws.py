@@ -140,6 +140,13 @@ def test_unified_screw():
     ({"count": 2, "tilting_moment": "10 N*m"}, "at least 3 screws"),
     ({"temperature_min": "90 degC", "temperature_max": "20 degC"}, "temperature_max"),
     ({"utilisation": 1.2}, "utilisation"),
+    ({"layers": [{"thickness": "-2 mm", "material": "C45E"}]}, "thickness"),   # clamp length <= 0
+    ({"engagement": "0.9 mm"}, "at least one pitch"),                           # M6: P = 1 mm
+    ({"mu_thread": [0.03, 0.12]}, "mu_thread"),                                 # below 0.04
+    ({"mu_head": 0.55}, "mu_head"),                                             # above 0.5
+    ({"hole": "4 mm"}, "larger than the thread"),
+    ({"hole": "6 mm"}, "larger than the thread"),                               # = d is no clearance
+    ({"thread": "M5x0.7"}, "did you mean 'M5"),
 ])
 def test_bad_inputs(kw, match):
     with pytest.raises((InputError, InputErrors), match=match):
@@ -293,3 +300,15 @@ def test_cli_text_states_its_basis(cli, tmp_path):
     assert "μG 0.1…0.16" in out and "service -20…90 °C" in out
     assert "surface pressure under head: on EN AW-6082-T6" in out
     assert "warning: embedding amounts" in out and "MethodRangeWarning" not in err
+
+
+@settings(max_examples=40, deadline=None)
+@given(dT=st.floats(1.0, 150.0), aP=st.floats(12e-6, 30e-6), lK=st.floats(2.0, 60.0))
+def test_thermal_change_sign_and_linearity(dT, aP, lK):
+    # VDI 2230-1:2015, 5.4.2.3: a part that expands more than the steel screw (αP > αS) raises the
+    # preload when warm and lowers it when cold, in proportion to ΔT
+    warm = core.thermal_preload_change(aP * lK, 11.5e-6, lK, dT, 5e-6, 1e-6)
+    cold = core.thermal_preload_change(aP * lK, 11.5e-6, lK, -dT, 5e-6, 1e-6)
+    assert warm > 0 > cold
+    assert cold == pytest.approx(-warm, rel=1e-12)
+    assert core.thermal_preload_change(aP * lK, 11.5e-6, lK, 2 * dT, 5e-6, 1e-6) == pytest.approx(2 * warm)
