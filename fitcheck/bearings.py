@@ -123,18 +123,24 @@ METHOD_NOTES: list[tuple[str, str]] = [
      "DIN 5425-1 recommendation tables"),
     ("Limits of interference of inner ring on shaft and of outer ring in housing, worst-case pairing",
      "ISO 286-1:2010, 3.3; ISO 286-2:2010 deviations"),
-    ("Effective interference after smoothing, 0.8 (Rz_seat + Rz_ring)", "DIN 7190-1:2017, 6.2"),
+    ("Effective interference after smoothing, 0.8 (Rz_seat + Rz_ring), taken off an interference "
+     "no further than to contact (a clearance seat keeps its clearance)",
+     "DIN 7190-1:2017, 6.2; common practice for the clearance side"),
     ("Thermal change of both seats from the ring, shaft and housing temperatures",
      "DIN 7190-1:2017, 6.4 (free linear expansion)"),
     ("Rings as uniform thick rings: inner ring d..d+(D-d)/4, outer ring D-(D-d)/4..D; Lamé contact "
-     "pressure, raceway growth and contraction, hoop stress at the inner-ring bore",
-     "Shigley 10th ed., eqs. (3-50), (3-56); common practice for the equivalent ring"),
+     "pressure, raceway growth and contraction, hoop stress at the inner-ring bore against 175 MPa "
+     "(about 25 ksi, through-hardened rings)",
+     "Shigley 10th ed., eqs. (3-50), (3-56); equivalent ring and stress limit: common practice"),
     ("Clearance loss from the inner ring running warmer than the outer ring, alpha*(ti - to)*dm",
      "common practice (bearing-trade handbooks)"),
-    ("Operating clearance = initial clearance (ISO 5753-1 group) - fit-up - thermal, min and max; "
-     "smallest group that stays above the limit", "ISO 5753-1:2009, Table 1"),
-    ("Axial force held by friction where no shoulder or retaining ring is declared, mu*p*pi*d*B",
-     "DIN 7190-1:2017, 7"),
+    ("Operating clearance = initial clearance (ISO 5753-1 group) - fit-up - thermal, min and max "
+     "(arithmetic worst case) and with every part at mid-tolerance; smallest group that stays above "
+     "the limit in the worst case", "ISO 5753-1:2009, Table 1"),
+    ("Ring under circumferential load: interference at the loosest pairing after smoothing and at "
+     "operating temperature, else at least at mid-tolerance", "DIN 5425-1; DIN 7190-1:2017, 6.2, 6.4"),
+    ("Axial force held by friction where no shoulder or retaining ring is declared, mu*p*pi*d*B, "
+     "mu per seat from data/pressfit_friction.csv (oiled longitudinal press fit)", "DIN 7190-1:2017, 7"),
 ]
 
 
@@ -914,7 +920,8 @@ def evaluate(inp: BearingSeatInput) -> BearingSeatResult:
                 b.d, red_op[1] - float(_clearance_min_below(b.d, smallest)) if smallest else None))
     hoop_max = float(np.max(hoop_i))
     checks.append(Check("hoop stress at the inner-ring bore", hoop_max, inp.hoop_stress_limit, "<=",
-                        "MPa", "Lamé, Shigley eq. (3-58); limit: common practice for through-hardened rings"))
+                        "MPa", "Lamé, Shigley eq. (3-58); limit: common practice for through-hardened rings "
+                        "(about 25 ksi)"))
     hoop_h_max = float(np.max(hoop_h))
     if hoop_h_max > 0 and math.isfinite(m_h.Rp02):
         checks.append(Check("hoop stress at the housing bore", hoop_h_max, m_h.Rp02, "<=", "MPa",

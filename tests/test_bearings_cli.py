@@ -31,6 +31,12 @@ def test_text_output_has_caution(cli):
     code, out, _ = cli("bearing", "6204", "--shaft", "k5", "--housing", "H7")
     assert code == 1   # group N loses all its clearance in the tightest pairing
     assert "CAUTION:" in out and "operating clearance" in out and "C4" in out
+    # the failure is explained: arithmetic worst case, mid-tolerance clearance, the group that passes
+    assert "fails only in the arithmetic worst case" in out and "Group C4 keeps" in out
+    assert "every part at mid-tolerance" in out
+    code, out, _ = cli("bearing", "6204", "--shaft", "k5", "--housing", "H7", "--json")
+    d = json.loads(out)
+    assert d["operating_clearance_mid_um"] > 0 > d["operating_clearance_um"][0]
 
 
 def test_bad_inputs_exit_2(cli):
