@@ -102,8 +102,10 @@ METHOD_NOTES: list[tuple[str, str]] = [
      "housing (lM = 0.33 d, with the housing's modulus)", "VDI 2230-1:2015, 5.1.1, step R3"),
     ("Clamped-part compliance δP: substitute deformation cone with tan φ for through-bolted (DSV) or tapped "
      "(ESV) joints from βL = lK/dw and y = D'A/dw, turning into a sleeve at D_A; summed layer by layer with "
-     "each layer's modulus. For a wide plate y is taken at the cone's own limiting diameter DA,Gr "
-     "(fixed point of y = 1 + w·βL·tan φ); by default D_A is the screw spacing of the pattern",
+     "each layer's modulus. y is limited to the cone's own limiting diameter DA,Gr (fixed point of "
+     "y = 1 + w·βL·tan φ): a wide plate, or any D_A beyond DA,Gr, takes that value (this program's "
+     "reading; the printed equations grow without bound in ln y); by default D_A is the screw spacing "
+     "of the pattern",
      "VDI 2230-1:2015, 5.1.2.2–5.1.2.3"),
     ("Shigley's frustum (30°) and the exponential fit of the member stiffness are computed alongside "
      "for comparison only", "Shigley, 10th ed., eqs. (8-20), (8-23)"),

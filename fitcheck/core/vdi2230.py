@@ -201,8 +201,13 @@ def tan_phi(l_K, d_w, D_A, tapped):
 
         \\tan\\varphi_E = 0.348 + 0.013\\ln\\beta_L + 0.193\\ln y \\quad\\text{(tapped thread, ESV)}
 
-    with β_L = l_K/d_w and y = D'_A/d_w (y is limited to ≥ 1; an infinite D_A is replaced by the
-    limiting diameter's value of y, as the cone never reaches it).
+    with β_L = l_K/d_w and y = D'_A/d_w, limited to 1 ≤ y ≤ y_Gr. y_Gr = D_A,Gr/d_w is the fixed
+    point of y = 1 + w·β_L·tan φ(y) (w = 1 DSV, 2 ESV): the cone's own limiting diameter. An
+    infinite plate takes y_Gr, and so does any D_A beyond D_A,Gr, because the cone never reaches
+    that outer edge; without the upper limit ln y would make a 1 m wide plate (tan φ ≈ 1.2) far
+    stiffer than the same plate taken as infinite, and the default D_A of a pattern (the screw
+    spacing) stiffer than a single screw in a plate. The limit is this program's reading; below
+    D_A,Gr the equations are used as printed.
 
     Parameters
     ----------
@@ -219,27 +224,28 @@ def tan_phi(l_K, d_w, D_A, tapped):
     ----------
     VDI 2230 Part 1:2015, Section 5.1.2.2, equations for tan φ_D and tan φ_E.
 
-    >>> round(float(tan_phi(20.0, 15.0, 30.0, False)), 4)
-    0.4551
+    >>> round(float(tan_phi(20.0, 15.0, 18.0, False)), 4)
+    0.3769
+    >>> bool(np.isclose(tan_phi(20.0, 15.0, 1000.0, False), tan_phi(20.0, 15.0, np.inf, False)))
+    True
     """
     l_K = np.asarray(l_K, float)
     d_w = np.asarray(d_w, float)
     beta = l_K / d_w
     D_A = np.asarray(D_A, float)
-    # For a wide plate, y is taken where the cone ends (D_A,Gr): a fixed-point of y = 1 + w·βL·tanφ.
-    y_finite = np.maximum(np.where(np.isfinite(D_A), D_A, d_w) / d_w, 1.0)
     tp = np.asarray(tapped, bool)
-    tD = 0.362 + 0.032 * np.log(beta / 2.0) + 0.153 * np.log(y_finite)
-    tE = 0.348 + 0.013 * np.log(beta) + 0.193 * np.log(y_finite)
-    t = np.where(tp, tE, tD)
-    # infinite D_A: iterate y -> D_A,Gr/d_w a few times (converges quickly, y grows slowly in log)
     w = np.where(tp, 2.0, 1.0)
-    for _ in range(30):
-        y_gr = 1.0 + w * beta * t
-        t_new = np.where(tp, 0.348 + 0.013 * np.log(beta) + 0.193 * np.log(y_gr),
-                         0.362 + 0.032 * np.log(beta / 2.0) + 0.153 * np.log(y_gr))
-        t = np.where(np.isfinite(D_A), t, t_new)
-    return t
+
+    def formula(y):
+        return np.where(tp, 0.348 + 0.013 * np.log(beta) + 0.193 * np.log(y),
+                        0.362 + 0.032 * np.log(beta / 2.0) + 0.153 * np.log(y))
+
+    # y_Gr: fixed point of y = 1 + w·βL·tanφ(y) (a contraction: dy/dy' = w·βL·0.19/y < 1 here)
+    y_gr = np.ones(np.broadcast(beta, tp).shape)
+    for _ in range(60):
+        y_gr = np.maximum(1.0 + w * beta * formula(y_gr), 1.0)
+    y = np.where(np.isfinite(D_A), np.maximum(D_A / d_w, 1.0), np.inf)
+    return formula(np.minimum(y, y_gr))
 
 
 def limiting_diameter(d_w, l_K, tan_ph, tapped):

@@ -79,11 +79,26 @@ def test_shigley_frustum_is_the_same_integral():
 def test_tan_phi_equations():
     # VDI 2230-1:2015, 5.1.2.2: tan φD = 0.362 + 0.032 ln(βL/2) + 0.153 ln y,
     # tan φE = 0.348 + 0.013 ln βL + 0.193 ln y  (equations evaluated by hand)  # from memory
-    bl, y = 20.0 / 15.0, 2.0
-    assert float(core.tan_phi(20.0, 15.0, 30.0, False)) == pytest.approx(
-        0.362 + 0.032 * math.log(bl / 2) + 0.153 * math.log(y), rel=1e-12)
-    assert float(core.tan_phi(20.0, 15.0, 30.0, True)) == pytest.approx(
-        0.348 + 0.013 * math.log(bl) + 0.193 * math.log(y), rel=1e-12)
+    # D_A = 18 mm lies below D_A,Gr of both joints, where the equations apply as printed
+    bl, y = 20.0 / 15.0, 18.0 / 15.0
+    tD = 0.362 + 0.032 * math.log(bl / 2) + 0.153 * math.log(y)
+    tE = 0.348 + 0.013 * math.log(bl) + 0.193 * math.log(y)
+    assert 18.0 < 15.0 + 20.0 * tD and 18.0 < 15.0 + 2 * 20.0 * tE
+    assert float(core.tan_phi(20.0, 15.0, 18.0, False)) == pytest.approx(tD, rel=1e-12)
+    assert float(core.tan_phi(20.0, 15.0, 18.0, True)) == pytest.approx(tE, rel=1e-12)
+
+
+@pytest.mark.parametrize("tapped", [False, True])
+def test_outer_diameter_beyond_the_cone_changes_nothing(tapped):
+    # once D_A exceeds the cone's limiting diameter the cone never reaches it: tan φ and δP equal
+    # the wide plate's, and tan φ never falls as D_A grows (this program's reading of 5.1.2.2)
+    lK, dw, dh = 8.0, 9.38, 6.6
+    DAs = np.array([10.0, 12.0, 14.0, 16.0, 18.0, 25.0, 60.0, 1e3, math.inf])
+    t = core.tan_phi(lK, dw, DAs, tapped)
+    assert np.all(np.diff(t) >= -1e-15)
+    assert t[-2] == pytest.approx(t[-1], rel=1e-12) and t[-3] == pytest.approx(t[-1], rel=1e-12)
+    dP = [core.clamp_compliance_closed_form(lK, 70e3, dw, dh, D, x, tapped) for D, x in zip(DAs, t, strict=True)]
+    assert dP[-3] == pytest.approx(dP[-1], rel=1e-12)
 
 
 @pytest.mark.parametrize("tapped", [False, True])
