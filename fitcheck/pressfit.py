@@ -653,6 +653,26 @@ class PressFitResult:
         p = np.maximum((np.asarray(interference, dtype=float) - loss) * p_per_mm, 0.0)
         return p * math.pi * self.diameter**2 * self.length * self.mu_slip / 2.0
 
+    def capacity_band(self, n: int = 200) -> dict:
+        """Torque capacity across the measured-interference band, for plots and charts.
+
+        Returns a dict: ``interference`` [mm] from a little below the loosest to a little
+        above the tightest measured interference (``n`` points), ``torque_capacity`` [N·mm]
+        there at operating condition, ``in_band`` (bool, inside the tolerance band),
+        ``required`` [N·mm] — the load the slip check needs, torque and thrust combined as an
+        equivalent torque √((2T/d)² + F²)·d/2, times the required slip safety — and
+        ``slip_safety_required`` [-].
+        """
+        lo, hi = self.interference_min, self.interference_max
+        pad = 0.05 * max(hi - lo, 1e-6)
+        x = np.linspace(lo - pad, hi + pad, n)
+        slip = next((c for c in self.checks if c.name == "slip at loosest fit"), None)
+        s_req = slip.limit if slip is not None else 1.0
+        demand = math.hypot(2.0 * self.torque / self.diameter, self.axial_force) * self.diameter / 2.0
+        return {"interference": x, "torque_capacity": self.torque_capacity_at(x),
+                "in_band": (x >= lo) & (x <= hi), "required": demand * s_req,
+                "slip_safety_required": s_req}
+
     def to_json(self) -> dict:
         """Summary for ``--json`` and reports (units in the key names)."""
         return {

@@ -6,7 +6,6 @@ figure) and return the Figure; they never call ``plt.show()``.
 
 from __future__ import annotations
 
-import numpy as np
 from matplotlib.figure import Figure
 
 
@@ -56,21 +55,12 @@ def plot_capacity_band(result, ax=None) -> Figure:
     below it the joint can slip.
     """
     fig, ax = _axes(ax)
-    lo, hi = result.interference_min, result.interference_max
-    pad = 0.05 * max(hi - lo, 1e-6)
-    x = np.linspace(lo - pad, hi + pad, 200)
-    t = result.torque_capacity_at(x) / 1000.0
-    ax.plot(x * 1000.0, t, color="tab:blue", label="torque capacity (operating)")
-    band = (x >= lo) & (x <= hi)
-    ax.fill_between(x[band] * 1000.0, 0.0, t[band], color="tab:blue", alpha=0.15,
-                    label="tolerance band")
-    slip = next((c for c in result.checks if c.name == "slip at loosest fit"), None)
-    s_req = slip.limit if slip is not None else 1.0
-    need = result.torque / 1000.0 * s_req
-    if result.axial_force > 0:
-        # equivalent torque of the combined demand √((2T/d)² + F²)
-        need = np.hypot(2.0 * result.torque / result.diameter, result.axial_force) * result.diameter / 2e3 * s_req
-    ax.axhline(need, color="tab:red", ls="--", label=f"required × slip safety {s_req:g}")
+    band = result.capacity_band()
+    x, t, inside = band["interference"] * 1000.0, band["torque_capacity"] / 1000.0, band["in_band"]
+    ax.plot(x, t, color="tab:blue", label="torque capacity (operating)")
+    ax.fill_between(x[inside], 0.0, t[inside], color="tab:blue", alpha=0.15, label="tolerance band")
+    ax.axhline(band["required"] / 1000.0, color="tab:red", ls="--",
+               label=f"required × slip safety {band['slip_safety_required']:g}")
     ax.set_xlabel("measured diametral interference [µm]")
     ax.set_ylabel("torque [N·m]")
     ax.set_title(f"{result.name}: torque capacity across the interference band", fontsize=10)

@@ -13,7 +13,7 @@ import streamlit as st
 
 from fitcheck import fits, pressfit
 from fitcheck.errors import InputError
-from fitcheck.ui import app, joints, state, unitsys, widgets
+from fitcheck.ui import app, charts, joints, state, unitsys, widgets
 from fitcheck.ui.joints import Field
 
 TABLE, PREFIX = "pressfit", "pf"
@@ -127,8 +127,7 @@ def _summary(r: pressfit.PressFitResult, system: str, name: str) -> None:
     c[1].metric("Shaft yield safety", unitsys.num(r.shaft_yield_safety, 3))
     c[2].metric("Loosening speed", unitsys.show(r.loosening_speed, "speed", system, digits=3),
                 help="speed at which the loosest fit loses all its pressure")
-    joints.plot(TABLE, name, "fitcheck.plots.pressfit:plot_capacity_band",
-                "torque capacity across the tolerance band, with the required torque")
+    _capacity_chart(r, system, name)
 
 
 def _details(r: pressfit.PressFitResult, system: str, name: str) -> None:
@@ -164,8 +163,46 @@ def _details(r: pressfit.PressFitResult, system: str, name: str) -> None:
         ], key=f"{PREFIX}.more")
     with right:
         st.subheader("Stress through the wall")
-        joints.plot(TABLE, name, "fitcheck.plots.pressfit:plot_wall_stresses",
-                    "radial, hoop and von Mises stress through shaft and hub, tightest fit")
+        _wall_chart(r, system, name)
+
+
+def _capacity_chart(r: pressfit.PressFitResult, system: str, name: str) -> None:
+    """Torque capacity across the tolerance band with the required torque (library data)."""
+    b = r.capacity_band()
+    fl, ft = charts.factor("small_length", system), charts.factor("torque", system)
+    df = pd.DataFrame({"interference": b["interference"] * 1000.0 * fl,
+                       "torque": b["torque_capacity"] * ft, "in_band": b["in_band"],
+                       "curve": "torque capacity (operating)"})
+    charts.lines(df, x="interference", y="torque", series="curve", band="in_band",
+                 x_title=charts.label("measured diametral interference", "small_length", system),
+                 y_title=charts.label("torque", "torque", system),
+                 hrules=[(b["required"] * ft,
+                          f"required × slip safety {b['slip_safety_required']:g}")],
+                 title="Torque capacity across the tolerance band (shaded)",
+                 key=f"{PREFIX}.{name}.capacity_chart")
+
+
+def _wall_chart(r: pressfit.PressFitResult, system: str, name: str) -> None:
+    """Radial, tangential and von Mises stress through shaft and hub at the tightest fit."""
+    prof = r.wall_profile()
+    fl, fs = charts.factor("length", system), charts.factor("stress", system)
+    frames = []
+    for part in ("shaft", "hub"):
+        for col, text in (("sr", "radial σr"), ("st", "tangential σt"), ("vm", "von Mises σv")):
+            frames.append(pd.DataFrame({"r": prof[f"r_{part}"] * fl,
+                                        "stress": prof[f"{col}_{part}"] * fs,
+                                        "stress component": text, "part": part}))
+    rules = [(r.hub_material.Rp02 * fs, f"Rp0.2 hub ({r.hub_material.name})")]
+    if r.shaft_material.Rp02 != r.hub_material.Rp02:
+        rules.append((r.shaft_material.Rp02 * fs, f"Rp0.2 shaft ({r.shaft_material.name})"))
+    cond = "operating" if prof["condition"] == "operating" else "room temperature, standstill"
+    charts.lines(pd.concat(frames, ignore_index=True), x="r", y="stress",
+                 series="stress component", detail="part", dashed=["von Mises σv"],
+                 x_title=charts.label("radius r (shaft | hub)", "length", system),
+                 y_title=charts.label("stress", "stress", system), hrules=rules,
+                 vrules=[(r.diameter / 2.0 * fl, "joint")],
+                 title=f"Tightest fit, {cond}", key=f"{PREFIX}.{name}.wall_chart",
+                 colors=["#2b6cb0", "#d97706", "#c53030"])  # radial, tangential, von Mises
 
 
 def _show_case(value: float, kind: str, system: str) -> str:

@@ -71,7 +71,25 @@ def test_press_fit_shows_the_library_results(app_test):
     assert m["Slip safety, loosest"] == unitsys.num(r.slip_safety_min, 3)
     checks = next(d.value for d in at.dataframe if "check" in d.value.columns)
     assert list(checks["check"]) == [c.name for c in r.checks]
-    assert len(at.get("image")) == 2  # capacity band and wall stresses
+    capacity, wall = (chart_data(c) for c in at.get("vega_lite_chart"))
+    band = r.capacity_band()
+    assert capacity[0]["torque"].to_numpy() == pytest.approx(band["torque_capacity"] / 1000.0)
+    assert capacity[1] == pytest.approx([band["required"] / 1000.0])  # N·mm -> N·m
+    prof = r.wall_profile()
+    vm = wall[0][wall[0]["stress component"] == "von Mises σv"]
+    assert vm["stress"].max() == pytest.approx(max(prof["vm_hub"].max(), prof["vm_shaft"].max()))
+
+
+def chart_data(el):
+    """A browser chart's data table and the values of its reference lines."""
+    import json
+
+    import pyarrow as pa
+
+    frame = pa.ipc.open_stream(el.proto.data.data).read_pandas()
+    spec = json.loads(el.proto.spec)
+    rules = [v["v"] for layer in spec["layer"] if "data" in layer for v in layer["data"]["values"]]
+    return frame, rules
 
 
 def test_press_fit_input_change_flows_to_the_results(app_test):

@@ -1,0 +1,88 @@
+"""Charts drawn in the browser (Vega-Lite) from data the library computes.
+
+The report draws the same quantities with matplotlib (``fitcheck.plots``); in the
+app a chart rendered by the browser keeps a page interaction fast (a matplotlib
+PNG costs 100 ms or more of server time each). This module only arranges data
+that the library returns and converts it to the display unit system; it
+computes nothing of its own.
+"""
+
+from __future__ import annotations
+
+from collections.abc import Sequence
+
+import pandas as pd
+import streamlit as st
+
+from fitcheck.ui import unitsys
+
+
+def factor(kind: str, system: str) -> float:
+    """Display-unit magnitude of one core unit of ``kind`` (all chart quantities are linear)."""
+    return unitsys.magnitude(1.0, kind, system)
+
+
+def label(text: str, kind: str, system: str) -> str:
+    """Axis title with the display unit, e.g. ``"stress [MPa]"``."""
+    return f"{text} [{unitsys.symbol(unitsys.unit_for(kind, system))}]"
+
+
+def lines(df: pd.DataFrame, *, x: str, y: str, series: str, x_title: str, y_title: str,
+          detail: str | None = None, dashed: Sequence[str] = (), hrules: Sequence[tuple] = (),
+          vrules: Sequence[tuple] = (), band: str | None = None, key: str, height: int = 320,
+          title: str = "", colors: Sequence[str] | None = None) -> None:
+    """Lines of ``y`` over ``x`` coloured by ``series``; optional reference lines and a shaded band.
+
+    ``colors`` sets the series colours in the order the series sort (Vega-Lite sorts names).
+
+    ``hrules`` / ``vrules`` are ``(value, text)`` pairs; ``band`` names a boolean column whose
+    true rows are shaded down to zero; series named in ``dashed`` are drawn dashed.
+    """
+    enc = {
+        "x": {"field": x, "type": "quantitative", "title": x_title},
+        "y": {"field": y, "type": "quantitative", "title": y_title},
+        "color": {"field": series, "type": "nominal", "title": None,
+                  "legend": {"orient": "bottom", "columns": 3},
+                  **({"scale": {"range": list(colors)}} if colors else {})},
+        "tooltip": [{"field": series, "type": "nominal"},
+                    {"field": x, "type": "quantitative", "format": ".4~g", "title": x_title},
+                    {"field": y, "type": "quantitative", "format": ".4~g", "title": y_title}],
+    }
+    if detail:
+        enc["detail"] = {"field": detail, "type": "nominal"}
+    if dashed:
+        enc["strokeDash"] = {"condition": {"test": {"field": series, "oneOf": list(dashed)},
+                                           "value": [6, 3]}, "value": [1, 0]}
+    layers: list[dict] = []
+    if band:
+        layers.append({"transform": [{"filter": {"field": band, "equal": True}}],
+                       "mark": {"type": "area", "opacity": 0.15, "color": "#2b6cb0"},
+                       "encoding": {"x": enc["x"], "y": enc["y"]}})
+    layers.append({"mark": {"type": "line", "strokeWidth": 2}, "encoding": enc})
+    for value, text in hrules:
+        layers.append(_rule("y", value, text))
+    for value, text in vrules:
+        layers.append(_rule("x", value, text))
+    spec = {"height": height, "layer": layers,
+            "config": {"axis": {"grid": True, "gridOpacity": 0.4}}}
+    if title:
+        spec["title"] = {"text": title, "fontSize": 13, "anchor": "start"}
+    st.vega_lite_chart(df, spec, width="stretch", key=key)
+
+
+def _rule(axis: str, value: float, text: str) -> dict:
+    other = "x" if axis == "y" else "y"
+    return {
+        "data": {"values": [{"v": float(value), "t": text}]},
+        "layer": [
+            {"mark": {"type": "rule", "color": "#b83232", "strokeDash": [4, 3]},
+             "encoding": {axis: {"field": "v", "type": "quantitative"},
+                          "tooltip": [{"field": "t", "type": "nominal", "title": "line"},
+                                      {"field": "v", "type": "quantitative", "format": ".4~g"}]}},
+            {"mark": {"type": "text", "align": "left", "dx": 4, "dy": -6, "fontSize": 11,
+                      "color": "#b83232"},
+             "encoding": {axis: {"field": "v", "type": "quantitative"},
+                          other: {"value": 4},
+                          "text": {"field": "t"}}},
+        ],
+    }
