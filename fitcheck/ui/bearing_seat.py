@@ -8,11 +8,15 @@ and thermal losses.
 
 from __future__ import annotations
 
+import math
+
+import pandas as pd
 import streamlit as st
 
 from fitcheck import bearings
 from fitcheck.errors import InputError
-from fitcheck.ui import app, joints, state, unitsys, widgets
+from fitcheck.plots.bearings import STAGES, budget_steps
+from fitcheck.ui import app, charts, joints, state, unitsys, widgets
 from fitcheck.ui.joints import Field
 
 TABLE, PREFIX = "bearing", "br"
@@ -101,7 +105,7 @@ def _results(r: bearings.BearingSeatResult, system: str, name: str) -> None:
     st.subheader(f"{r.designation}: shaft {r.shaft_class}, housing {r.housing_class}")
     c = st.columns(2)
     c[0].metric("Operating clearance", unitsys.show_range(r.operating_clearance_um, "small_length",
-                                                          system),
+                                                          system, digits=3),
                 help="radial internal clearance in operation, tightest … loosest pairing")
     c[1].metric("Smallest group that passes", r.smallest_passing_group or "none",
                 help="ISO 5753-1 clearance group whose operating clearance stays above the limit")
@@ -112,8 +116,27 @@ def _results(r: bearings.BearingSeatResult, system: str, name: str) -> None:
     c[1].metric("Outer ring clearance", unitsys.show_range(r.housing_clearance_um, "small_length",
                                                            system),
                 help="ring in its housing bore, smallest … largest (negative: interference)")
-    joints.plot(TABLE, name, "fitcheck.plots.bearings:plot_clearance_budget",
-                "radial clearance from initial through fit-up and thermal to operating")
+    _budget_chart(r, system, name)
+
+
+def _budget_chart(r: bearings.BearingSeatResult, system: str, name: str) -> None:
+    """Radial clearance from initial through fit-up and thermal to operating (library steps)."""
+    steps = budget_steps(r)
+    if not all(math.isfinite(v) for s in steps.values() for v in s):
+        st.caption("No clearance budget: ISO 5753-1 groups do not apply to this bearing type.")
+        return
+    f = charts.factor("small_length", system)  # the steps are in µm, the core unit of small lengths
+    rows = []
+    for key, group in (("min", "tightest pairing"), ("max", "loosest pairing")):
+        s = steps[key]
+        for stage, a, b in zip(STAGES, (0.0, s[0], s[1], 0.0), s, strict=True):
+            rows.append({"stage": stage, "pairing": group, "from": a * f, "to": b * f})
+    lim = r.clearance_min_um * f
+    charts.waterfall(pd.DataFrame(rows), stage="stage", group="pairing", start="from", end="to",
+                     order=STAGES, y_title=charts.label("radial clearance", "small_length", system),
+                     hrules=[(lim, "limit")] if lim else [], colors=["#3b6ea5", "#b5472f"],
+                     title=f"Clearance budget, group {r.clearance_group}",
+                     key=f"{PREFIX}.{name}.budget_chart")
 
 
 def _details(r: bearings.BearingSeatResult, system: str, name: str) -> None:

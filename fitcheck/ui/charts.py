@@ -86,3 +86,36 @@ def _rule(axis: str, value: float, text: str) -> dict:
                           "text": {"field": "t"}}},
         ],
     }
+
+
+def waterfall(df: pd.DataFrame, *, stage: str, group: str, start: str, end: str, y_title: str,
+              order: Sequence[str], hrules: Sequence[tuple] = (), key: str, height: int = 300,
+              title: str = "", colors: Sequence[str] | None = None) -> None:
+    """Floating bars from ``start`` to ``end`` per ``stage`` (in ``order``), side by side per ``group``."""
+    enc = {
+        "x": {"field": stage, "type": "nominal", "sort": list(order), "title": None,
+              "axis": {"labelAngle": 0}},
+        "xOffset": {"field": group, "type": "nominal"},
+        "y": {"field": start, "type": "quantitative", "title": y_title},
+        "y2": {"field": end},
+        "color": {"field": group, "type": "nominal", "title": None,
+                  "legend": {"orient": "bottom"},
+                  **({"scale": {"range": list(colors)}} if colors else {})},
+        "tooltip": [{"field": group, "type": "nominal"}, {"field": stage, "type": "nominal"},
+                    {"field": end, "type": "quantitative", "format": ".3~f",
+                     "title": "clearance after"}],
+    }
+    layers = [{"mark": {"type": "bar", "opacity": 0.85}, "encoding": enc},
+              {"mark": {"type": "text", "dy": -6, "fontSize": 10},
+               "encoding": {"x": enc["x"], "xOffset": enc["xOffset"],
+                            "y": {"field": "top", "type": "quantitative"},
+                            "text": {"field": end, "type": "quantitative", "format": ".1f"}}},
+              {"data": {"values": [{"v": 0.0}]}, "mark": {"type": "rule", "color": "#555555"},
+               "encoding": {"y": {"field": "v", "type": "quantitative"}}}]
+    for value, text in hrules:
+        layers.append(_rule("y", value, text))
+    spec = {"height": height, "layer": layers, "transform": [
+        {"calculate": f"max(datum['{start}'], datum['{end}'])", "as": "top"}]}
+    if title:
+        spec["title"] = {"text": title, "fontSize": 13, "anchor": "start"}
+    st.vega_lite_chart(df, spec, width="stretch", key=key)

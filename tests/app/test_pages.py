@@ -141,9 +141,12 @@ def test_bearing_page_shows_the_library_results(app_test):
     r = library_result(demo_doc(), "bearing", "A-side-6202")
     m = metrics(at)
     assert m["Operating clearance"] == unitsys.show_range(r.operating_clearance_um,
-                                                          "small_length", "SI")
+                                                          "small_length", "SI", digits=3)
     assert m["Smallest group that passes"] == (r.smallest_passing_group or "none")
-    assert len(at.get("image")) == 1  # clearance budget
+    (budget, rules), = (chart_data(c) for c in at.get("vega_lite_chart"))
+    tight = budget[budget["pairing"] == "tightest pairing"]
+    assert tight["to"].iloc[-1] == pytest.approx(r.operating_clearance_um[0])  # µm in SI
+    assert rules == [0.0, pytest.approx(r.clearance_min_um)]
 
 
 def test_bearing_page_other_joint_and_suggested_seats(app_test):
