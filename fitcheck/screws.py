@@ -590,6 +590,30 @@ class ScrewJointResult:
     def clamp_stiffness(self) -> float:
         return 1.0 / self.delta_P
 
+    def joint_diagram(self) -> dict[str, float]:
+        """Corner points of the joint diagram at the smallest preload in service.
+
+        VDI 2230-1:2015, Section 3.1 (joint diagram): the screw line rises with 1/δS, the
+        clamped parts' line falls with 1/δP from the preload F_V; under the axial load F_A
+        the screw takes Φ·F_A and the clamped parts are relieved by (1 − Φ)·F_A.
+
+        Returns
+        -------
+        dict
+            ``F_V`` smallest preload in service, FM,zul/αA − FZ − thermal loss [N];
+            ``f_S``, ``f_P`` elongation of the screw and compression of the clamped parts under
+            F_V [mm]; ``F_S`` screw force under load, F_V + Φ·F_A [N]; ``f_A`` added elongation
+            Φ·F_A·δS [mm]; ``F_KR`` residual clamp load F_V − (1 − Φ)·F_A [N]; ``F_A`` [N];
+            ``F_M_zul`` [N].
+        """
+        th_loss = max(0.0, -self.dF_th_cold, -self.dF_th_warm)
+        F_V = max(self.F_M_zul / self.alpha_A - self.F_Z - th_loss, 0.0)
+        dF_S = self.load_factor * self.F_A
+        return {"F_V": F_V, "f_S": F_V * self.delta_S, "f_P": F_V * self.delta_P,
+                "F_S": F_V + dF_S, "f_A": dF_S * self.delta_S,
+                "F_KR": F_V - (1.0 - self.load_factor) * self.F_A, "F_A": self.F_A,
+                "F_M_zul": self.F_M_zul}
+
     def to_dict(self) -> dict:
         """Every figure under a name with its unit, the checks and the verdict (JSON-ready)."""
         return {

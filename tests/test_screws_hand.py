@@ -81,3 +81,14 @@ def test_cover_torque_is_plausible_against_table_a1():
     r = evaluate(ScrewJointInput.from_mapping(CASE))
     assert r.F_M_zul / 1000 == pytest.approx(7.4, abs=0.05)
     assert 5.2 < r.tightening_torque / 1000 < 5.6
+
+
+def test_joint_diagram_corners_agree_with_the_checks():
+    # VDI 2230-1:2015, 3.1: F_KR = F_V − (1 − Φ)·F_A with F_V = FM,zul/αA − FZ − thermal loss
+    from fitcheck import case
+
+    r = next(j.result for j in case.evaluate(case.demo_case()).joints if j.name == "cover-screws")
+    j = r.joint_diagram()
+    assert j["F_KR"] == pytest.approx(r.F_KR_min, rel=1e-12)
+    assert j["F_S"] - j["F_V"] == pytest.approx(r.load_factor * r.F_A, rel=1e-12)
+    assert j["f_S"] / j["f_P"] == pytest.approx(r.delta_S / r.delta_P, rel=1e-12)

@@ -28,20 +28,14 @@ def plot_joint_diagram(result, ax=None) -> Figure:
     else:
         fig = ax.figure
     r = result
-    dS, dP = r.delta_S, r.delta_P
-    th_loss = max(0.0, -r.dF_th_cold, -r.dF_th_warm)
-    FV = max(r.F_M_zul / r.alpha_A - r.F_Z - th_loss, 0.0)
-    fS = FV * dS * 1000.0   # µm
-    fP = FV * dP * 1000.0
+    j = r.joint_diagram()
+    FV, FA = j["F_V"], j["F_A"]
+    fS, fP = j["f_S"] * 1000.0, j["f_P"] * 1000.0  # µm
     ax.plot([0, fS], [0, FV / 1000], color="tab:blue", lw=2, label="screw (1/δS)")
     ax.plot([fS, fS + fP], [FV / 1000, 0], color="tab:orange", lw=2, label="clamped parts (1/δP)")
     # operating state: the screw takes Φ·FA, the clamped parts are relieved by (1 − Φ)·FA
-    FA = r.F_A
     if FA > 0:
-        dF_S = r.load_factor * FA
-        df = dF_S * dS * 1000.0
-        FS = FV + dF_S
-        FKR = FV - (1.0 - r.load_factor) * FA
+        df, FS, FKR = j["f_A"] * 1000.0, j["F_S"], j["F_KR"]
         ax.plot([fS, fS + df], [FV / 1000, FS / 1000], color="tab:blue", lw=1, ls="--")
         ax.vlines(fS + df, FKR / 1000, FS / 1000, color="tab:red", lw=2, label=f"FA = {FA / 1000:.2f} kN")
         ax.hlines(FKR / 1000, fS, fS + df, color="tab:green", lw=1, ls=":")
@@ -56,7 +50,7 @@ def plot_joint_diagram(result, ax=None) -> Figure:
     ax.set_ylabel("force [kN]")
     ax.set_title(f"Joint diagram: {r.name} ({r.thread} {r.property_class}), Φ = {r.load_factor:.3f}")
     ax.set_xlim(left=0)
-    ax.set_ylim(bottom=0, top=max(r.F_M_zul, FV + r.load_factor * FA) / 1000 * 1.15)
+    ax.set_ylim(bottom=0, top=max(r.F_M_zul, j["F_S"]) / 1000 * 1.15)
     ax.legend(fontsize=8, loc="upper right")
     ax.grid(True, alpha=0.3)
     return fig

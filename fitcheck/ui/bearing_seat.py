@@ -134,7 +134,8 @@ def _budget_chart(r: bearings.BearingSeatResult, system: str, name: str) -> None
     lim = r.clearance_min_um * f
     charts.waterfall(pd.DataFrame(rows), stage="stage", group="pairing", start="from", end="to",
                      order=STAGES, y_title=charts.label("radial clearance", "small_length", system),
-                     hrules=[(lim, "limit")] if lim else [], colors=["#3b6ea5", "#b5472f"],
+                     hrules=[(lim, "limit")] if lim else [],
+                     colors={"tightest pairing": "#b5472f", "loosest pairing": "#3b6ea5"},
                      title=f"Clearance budget, group {r.clearance_group}",
                      key=f"{PREFIX}.{name}.budget_chart")
 

@@ -9,7 +9,7 @@ computes nothing of its own.
 
 from __future__ import annotations
 
-from collections.abc import Sequence
+from collections.abc import Mapping, Sequence
 
 import pandas as pd
 import streamlit as st
@@ -30,10 +30,10 @@ def label(text: str, kind: str, system: str) -> str:
 def lines(df: pd.DataFrame, *, x: str, y: str, series: str, x_title: str, y_title: str,
           detail: str | None = None, dashed: Sequence[str] = (), hrules: Sequence[tuple] = (),
           vrules: Sequence[tuple] = (), band: str | None = None, key: str, height: int = 320,
-          title: str = "", colors: Sequence[str] | None = None) -> None:
+          title: str = "", colors: Mapping[str, str] | None = None) -> None:
     """Lines of ``y`` over ``x`` coloured by ``series``; optional reference lines and a shaded band.
 
-    ``colors`` sets the series colours in the order the series sort (Vega-Lite sorts names).
+    ``colors`` maps series names to colours (and fixes the legend order).
 
     ``hrules`` / ``vrules`` are ``(value, text)`` pairs; ``band`` names a boolean column whose
     true rows are shaded down to zero; series named in ``dashed`` are drawn dashed.
@@ -43,7 +43,8 @@ def lines(df: pd.DataFrame, *, x: str, y: str, series: str, x_title: str, y_titl
         "y": {"field": y, "type": "quantitative", "title": y_title},
         "color": {"field": series, "type": "nominal", "title": None,
                   "legend": {"orient": "bottom", "columns": 3},
-                  **({"scale": {"range": list(colors)}} if colors else {})},
+                  **({"scale": {"domain": list(colors), "range": list(colors.values())}}
+                     if colors else {})},
         "tooltip": [{"field": series, "type": "nominal"},
                     {"field": x, "type": "quantitative", "format": ".4~g", "title": x_title},
                     {"field": y, "type": "quantitative", "format": ".4~g", "title": y_title}],
@@ -90,7 +91,7 @@ def _rule(axis: str, value: float, text: str) -> dict:
 
 def waterfall(df: pd.DataFrame, *, stage: str, group: str, start: str, end: str, y_title: str,
               order: Sequence[str], hrules: Sequence[tuple] = (), key: str, height: int = 300,
-              title: str = "", colors: Sequence[str] | None = None) -> None:
+              title: str = "", colors: Mapping[str, str] | None = None) -> None:
     """Floating bars from ``start`` to ``end`` per ``stage`` (in ``order``), side by side per ``group``."""
     enc = {
         "x": {"field": stage, "type": "nominal", "sort": list(order), "title": None,
@@ -100,7 +101,8 @@ def waterfall(df: pd.DataFrame, *, stage: str, group: str, start: str, end: str,
         "y2": {"field": end},
         "color": {"field": group, "type": "nominal", "title": None,
                   "legend": {"orient": "bottom"},
-                  **({"scale": {"range": list(colors)}} if colors else {})},
+                  **({"scale": {"domain": list(colors), "range": list(colors.values())}}
+                     if colors else {})},
         "tooltip": [{"field": group, "type": "nominal"}, {"field": stage, "type": "nominal"},
                     {"field": end, "type": "quantitative", "format": ".3~f",
                      "title": "clearance after"}],

@@ -12,7 +12,7 @@ import pandas as pd
 import streamlit as st
 
 from fitcheck import materials, screws, threads
-from fitcheck.ui import app, joints, state, unitsys, widgets
+from fitcheck.ui import app, charts, joints, state, unitsys, widgets
 from fitcheck.ui.joints import Field
 
 TABLE, PREFIX = "screws", "sc"
@@ -162,8 +162,31 @@ def _summary(r: screws.ScrewJointResult, system: str, name: str) -> None:
     c[1].metric("Largest preload αA·F_M,min", f(r.F_M_max))
     c[2].metric("Residual clamp load", f(r.F_KR_min),
                 help="least clamp load left in service at the smallest preload")
-    joints.plot(TABLE, name, "fitcheck.plots.screws:plot_joint_diagram",
-                "joint diagram: screw and clamped-part force against elongation")
+    _joint_chart(r, system, name)
+
+
+def _joint_chart(r: screws.ScrewJointResult, system: str, name: str) -> None:
+    """Joint diagram (VDI 2230) of the most loaded screw from the library's corner points."""
+    j = r.joint_diagram()
+    fx = charts.factor("small_length", system) * 1000.0  # mm -> µm -> display
+    fy = charts.factor("force", system)
+    fS, fP, fA = j["f_S"], j["f_P"], j["f_A"]
+    lines = [("screw", [(0.0, 0.0), (fS, j["F_V"])]),
+             ("clamped parts", [(fS, j["F_V"]), (fS + fP, 0.0)])]
+    if j["F_A"] > 0:
+        lines += [("screw under F_A", [(fS, j["F_V"]), (fS + fA, j["F_S"])]),
+                  ("F_A", [(fS + fA, j["F_KR"]), (fS + fA, j["F_S"])]),
+                  ("F_KR", [(fS, j["F_KR"]), (fS + fA, j["F_KR"])])]
+    df = pd.DataFrame([{"line": n, "x": x * fx, "F": y * fy} for n, pts in lines for x, y in pts])
+    charts.lines(df, x="x", y="F", series="line", detail="line",
+                 dashed=["screw under F_A", "F_KR"],
+                 x_title=charts.label("elongation / compression", "small_length", system),
+                 y_title=charts.label("force", "force", system),
+                 hrules=[(j["F_M_zul"] * fy, "F_M,zul")],
+                 title=f"Joint diagram at the smallest preload in service, Φ = {r.load_factor:.3f}",
+                 key=f"{PREFIX}.{name}.joint_chart",
+                 colors={"screw": "#2b6cb0", "clamped parts": "#d97706",
+                         "screw under F_A": "#2b6cb0", "F_A": "#c53030", "F_KR": "#2f855a"})
 
 
 def _details(r: screws.ScrewJointResult, system: str, name: str) -> None:

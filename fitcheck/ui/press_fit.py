@@ -202,7 +202,8 @@ def _wall_chart(r: pressfit.PressFitResult, system: str, name: str) -> None:
                  y_title=charts.label("stress", "stress", system), hrules=rules,
                  vrules=[(r.diameter / 2.0 * fl, "joint")],
                  title=f"Tightest fit, {cond}", key=f"{PREFIX}.{name}.wall_chart",
-                 colors=["#2b6cb0", "#d97706", "#c53030"])  # radial, tangential, von Mises
+                 colors={"radial σr": "#2b6cb0", "tangential σt": "#d97706",
+                         "von Mises σv": "#c53030"})
 
 
 def _show_case(value: float, kind: str, system: str) -> str:

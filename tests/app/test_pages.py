@@ -185,7 +185,12 @@ def test_screw_page_shows_the_library_results(app_test):
     m = metrics(at)
     assert m["Tightening torque M_A"] == unitsys.show(r.tightening_torque, "torque", "SI")
     assert m["Permissible preload F_M,zul"] == unitsys.show(r.F_M_zul, "force", "SI")
-    assert len(at.get("image")) == 1  # joint diagram
+    (diagram, rules), = (chart_data(c) for c in at.get("vega_lite_chart"))
+    j = r.joint_diagram()
+    kr = diagram[diagram["line"] == "F_KR"]
+    assert kr["F"].to_numpy() == pytest.approx([r.F_KR_min] * 2)  # N in SI
+    assert rules == [pytest.approx(r.F_M_zul)]
+    assert diagram["x"].max() == pytest.approx((j["f_S"] + j["f_P"]) * 1000.0)  # µm in SI
 
 
 def test_screw_change_and_bad_thread(app_test):
