@@ -14,7 +14,6 @@ The widgets are keyed ``<prefix>.<joint name>.<key>`` so a value survives page s
 
 from __future__ import annotations
 
-import importlib
 import re
 import warnings
 from collections.abc import Mapping, Sequence
@@ -125,25 +124,6 @@ def _evaluate_text(text: str) -> tuple[object | None, list[tuple], list[str]]:
     msgs = list(dict.fromkeys(str(w.message) for w in caught
                               if not issubclass(w.category, DeprecationWarning)))
     return result, [], msgs
-
-
-@st.cache_data(show_spinner=False, max_entries=64)
-def _plot_png(text: str, spec: str) -> bytes | None:
-    """A library plot of the one-joint case ``text`` as PNG (cached: redrawn only when it changes)."""
-    result, errs, _ = _evaluate_text(text)
-    if result is None or not result.joints:
-        return None
-    mod_name, _, fn = spec.partition(":")
-    try:
-        plot = getattr(importlib.import_module(mod_name), fn)
-    except (ImportError, AttributeError):
-        return None
-    return widgets.png(plot(result.joints[0].result))
-
-
-def plot(table: str, name: str, spec: str, alt: str) -> None:
-    """Show the plot ``"module:function"`` of one joint of the working case."""
-    widgets.image(_plot_png(state.doc_text(state.single_joint_doc(table, name)), spec), alt)
 
 
 def evaluate(table: str, name: str):

@@ -38,14 +38,6 @@ def caution() -> None:
     st.warning(fitcheck.CAUTION, icon=":material/warning:")
 
 
-def figure(fig) -> None:
-    """Show a matplotlib figure and close it (figures are never left open between runs)."""
-    try:
-        st.pyplot(fig, clear_figure=False, width="stretch")
-    finally:
-        plt.close(fig)
-
-
 def png(fig, dpi: int = 120) -> bytes:
     """A figure as PNG bytes; the figure is closed (for cached plots shown with :func:`image`)."""
     import io
