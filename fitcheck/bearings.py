@@ -1062,3 +1062,22 @@ def summary_rows(result: BearingSeatResult) -> list[list[str]]:
          "", "um"],
     ]
 
+
+
+#: Stages of the clearance budget, in order.
+BUDGET_STAGES = ("initial", "fit-up", "thermal", "operating")
+
+
+def clearance_budget(result) -> dict[str, list[float]]:
+    """Clearance after each stage of :data:`BUDGET_STAGES` [µm], tightest ("min") and loosest ("max").
+
+    The data of the clearance-budget plot and the browser chart.
+
+    >>> class R:
+    ...     initial_clearance_um = (5.0, 20.0); clearance_after_fitup_um = (-8.0, 20.0)
+    ...     operating_clearance_um = (-10.0, 19.0)
+    >>> clearance_budget(R())["min"]
+    [5.0, -8.0, -10.0, -10.0]
+    """
+    g0, g1, g3 = result.initial_clearance_um, result.clearance_after_fitup_um, result.operating_clearance_um
+    return {"min": [g0[0], g1[0], g3[0], g3[0]], "max": [g0[1], g1[1], g3[1], g3[1]]}

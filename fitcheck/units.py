@@ -31,7 +31,17 @@ import pint
 
 from .errors import InputError
 
-ureg = pint.UnitRegistry(autoconvert_offset_to_baseunit=True)
+
+def _registry() -> pint.UnitRegistry:
+    # pint's parsed-definitions cache (in the user's cache folder) cuts start-up from about
+    # 0.25 s to 0.02 s; without a writable cache folder the registry is built from its text.
+    try:
+        return pint.UnitRegistry(autoconvert_offset_to_baseunit=True, cache_folder=":auto:")
+    except Exception:  # pragma: no cover - read-only home, unusual file systems
+        return pint.UnitRegistry(autoconvert_offset_to_baseunit=True)
+
+
+ureg = _registry()
 ureg.define("micrometre = 1e-6 m = um = µm = micron")
 pint.set_application_registry(ureg)
 Q_ = ureg.Quantity

@@ -6,24 +6,12 @@ import math
 
 from matplotlib.figure import Figure
 
+from ..bearings import clearance_budget
+
 _MIN = "#b5472f"   # tightest pairing (smallest clearance)
 _MAX = "#3b6ea5"   # loosest pairing (largest clearance)
 _LIMIT = "#444444"
 
-STAGES = ("initial", "fit-up", "thermal", "operating")
-
-
-def budget_steps(result) -> dict[str, list[float]]:
-    """Clearance after each stage [µm] for the tightest ("min") and loosest ("max") pairing.
-
-    >>> class R:
-    ...     initial_clearance_um = (5.0, 20.0); clearance_after_fitup_um = (-8.0, 20.0)
-    ...     operating_clearance_um = (-10.0, 19.0)
-    >>> budget_steps(R())["min"]
-    [5.0, -8.0, -10.0, -10.0]
-    """
-    g0, g1, g3 = result.initial_clearance_um, result.clearance_after_fitup_um, result.operating_clearance_um
-    return {"min": [g0[0], g1[0], g3[0], g3[0]], "max": [g0[1], g1[1], g3[1], g3[1]]}
 
 
 def plot_clearance_budget(result, ax=None) -> Figure:
@@ -58,7 +46,7 @@ def plot_clearance_budget(result, ax=None) -> Figure:
         ax = fig.add_subplot()
     else:
         fig = ax.figure
-    steps = budget_steps(result)
+    steps = clearance_budget(result)
     width = 0.36
     finite = all(math.isfinite(v) for s in steps.values() for v in s)
     for k, (key, color, label) in enumerate((("min", _MIN, "tightest pairing"),

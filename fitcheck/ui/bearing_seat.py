@@ -15,7 +15,6 @@ import streamlit as st
 
 from fitcheck import bearings
 from fitcheck.errors import InputError
-from fitcheck.plots.bearings import STAGES, budget_steps
 from fitcheck.ui import app, charts, joints, state, unitsys, widgets
 from fitcheck.ui.joints import Field
 
@@ -121,7 +120,7 @@ def _results(r: bearings.BearingSeatResult, system: str, name: str) -> None:
 
 def _budget_chart(r: bearings.BearingSeatResult, system: str, name: str) -> None:
     """Radial clearance from initial through fit-up and thermal to operating (library steps)."""
-    steps = budget_steps(r)
+    steps = bearings.clearance_budget(r)
     if not all(math.isfinite(v) for s in steps.values() for v in s):
         st.caption("No clearance budget: ISO 5753-1 groups do not apply to this bearing type.")
         return
@@ -129,11 +128,11 @@ def _budget_chart(r: bearings.BearingSeatResult, system: str, name: str) -> None
     rows = []
     for key, group in (("min", "tightest pairing"), ("max", "loosest pairing")):
         s = steps[key]
-        for stage, a, b in zip(STAGES, (0.0, s[0], s[1], 0.0), s, strict=True):
+        for stage, a, b in zip(bearings.BUDGET_STAGES, (0.0, s[0], s[1], 0.0), s, strict=True):
             rows.append({"stage": stage, "pairing": group, "from": a * f, "to": b * f})
     lim = r.clearance_min_um * f
     charts.waterfall(pd.DataFrame(rows), stage="stage", group="pairing", start="from", end="to",
-                     order=STAGES, y_title=charts.label("radial clearance", "small_length", system),
+                     order=bearings.BUDGET_STAGES, y_title=charts.label("radial clearance", "small_length", system),
                      hrules=[(lim, "limit")] if lim else [],
                      colors={"tightest pairing": "#b5472f", "loosest pairing": "#3b6ea5"},
                      title=f"Clearance budget, group {r.clearance_group}",

@@ -6,7 +6,6 @@ import math
 import re
 from collections.abc import Iterable, Mapping, Sequence
 
-import matplotlib.pyplot as plt
 import pandas as pd
 import streamlit as st
 
@@ -39,15 +38,12 @@ def caution() -> None:
 
 
 def png(fig, dpi: int = 120) -> bytes:
-    """A figure as PNG bytes; the figure is closed (for cached plots shown with :func:`image`)."""
+    """A library figure (a plain ``matplotlib.figure.Figure``, never registered with pyplot) as PNG."""
     import io
 
-    try:
-        buf = io.BytesIO()
-        fig.savefig(buf, format="png", dpi=dpi)  # no bbox_inches="tight": it draws twice
-        return buf.getvalue()
-    finally:
-        plt.close(fig)
+    buf = io.BytesIO()
+    fig.savefig(buf, format="png", dpi=dpi)  # no bbox_inches="tight": it draws twice
+    return buf.getvalue()
 
 
 def image(data: bytes | None, alt: str) -> None:
