@@ -747,11 +747,22 @@ def _case(label, delta, d, L, di, Do, s: Material, h: Material, mu, loss_rz, Ts,
 
 # --------------------------------------------------------------------------- evaluate
 
-def evaluate(inp: PressFitInput) -> PressFitResult:
-    """Evaluate one press or shrink fit: cases, capacities, stresses, assembly and checks.
+def core_arguments(inp: PressFitInput) -> tuple[dict, str, str]:
+    """Keyword arguments of :func:`fitcheck.core.pressfit.evaluate` for one input, defaults resolved.
 
-    Warns with :class:`~fitcheck.errors.MethodRangeWarning` where the elastic method
-    does not hold (hub bore or shaft yielding) or a material needs caution.
+    One place resolves what the input leaves open — friction from the table by material pair
+    and assembly, the hub diameter from module and teeth, the joining clearance 0.001·d
+    (common practice), the heating limit of the hub material, brittle parts — for
+    :func:`evaluate` and for the tolerance study.
+
+    Returns
+    -------
+    kwargs : dict
+        Arguments of the kernel in core units (scalars).
+    friction_source : str
+        Where the friction coefficients came from.
+    hub_rule : str
+        How the hub outer diameter was found.
     """
     if not isinstance(inp, PressFitInput):
         raise InputError("pressfit", type(inp).__name__, "a PressFitInput (use PressFitInput.from_mapping)")
@@ -762,12 +773,9 @@ def evaluate(inp: PressFitInput) -> PressFitResult:
         d = inp.diameter
     Do, do_rule = inp.resolved_hub_outer_diameter()
     s, h = inp.shaft_material, inp.hub_material
-    label = f"pressfit[{inp.name}]"
-
-    # friction
     tab = default_friction(s.group, h.group, inp.assembly)
     if inp.mu_slip is None and tab is None:
-        raise InputError(f"{label}.mu_slip", None,
+        raise InputError(f"pressfit[{inp.name}].mu_slip", None,
                          f"a friction coefficient: {FRICTION_TABLE} has none for {s.group} "
                          f"in {h.group} ({inp.assembly})")
     mu_slip = inp.mu_slip if inp.mu_slip is not None else tab[0]
@@ -777,37 +785,46 @@ def evaluate(inp: PressFitInput) -> PressFitResult:
         mu_press = tab[1]
     else:
         mu_press = mu_slip
-    src_parts = []
-    src_parts.append("mu_slip: given" if inp.mu_slip is not None else f"mu_slip: {tab[2]}")
+    src_parts = ["mu_slip: given" if inp.mu_slip is not None else f"mu_slip: {tab[2]}"]
     if inp.mu_press is not None:
         src_parts.append("mu_press: given")
     elif inp.mu_slip is None:
         src_parts.append(f"mu_press: {FRICTION_TABLE}")
     else:
         src_parts.append("mu_press: = mu_slip")
-    friction_source = "; ".join(src_parts)
-
-    brittle_s, brittle_h = not s.is_ductile, not h.is_ductile
-    shrink = inp.assembly == "shrink"
-    jc = inp.joining_clearance if inp.joining_clearance is not None else 1e-3 * d  # common practice
     T0 = inp.temperature_assembly
-    T_cool = inp.temperature_shaft_cooled if inp.temperature_shaft_cooled is not None else T0
-    max_heat = h.max_heating_C if not math.isnan(h.max_heating_C) else np.inf
-    loss_rz = inp.smoothing_factor * (inp.rz_shaft + inp.rz_hub)
-    w = inp.speed
-
-    r = _core.evaluate(
+    kwargs = dict(
         interference_min=imin, interference_max=imax, d=d, L=inp.length, di=inp.shaft_bore, Do=Do,
         Es=s.E, nus=s.nu, alphas=s.alpha, Rps=s.Rp02, rhos=s.density,
         Eh=h.E, nuh=h.nu, alphah=h.alpha, Rph=h.Rp02, rhoh=h.density,
         mu_slip=mu_slip, mu_press=mu_press, rz_shaft=inp.rz_shaft, rz_hub=inp.rz_hub,
         smoothing=inp.smoothing_factor, torque=inp.torque, axial_force=inp.axial_force,
-        slip_safety=inp.slip_safety, omega=w, T_shaft=inp.temperature_shaft,
-        T_hub=inp.temperature_hub, T_assembly=T0, joining_clearance=jc,
-        yield_safety=inp.yield_safety, brittle_shaft=brittle_s, brittle_hub=brittle_h,
-        Rms=s.Rm, Rmh=h.Rm, fracture_safety=inp.fracture_safety, shrink=shrink,
-        max_heating=max_heat, T_shaft_cooled=T_cool,
+        slip_safety=inp.slip_safety, omega=inp.speed, T_shaft=inp.temperature_shaft,
+        T_hub=inp.temperature_hub, T_assembly=T0,
+        joining_clearance=inp.joining_clearance if inp.joining_clearance is not None else 1e-3 * d,
+        yield_safety=inp.yield_safety, brittle_shaft=not s.is_ductile, brittle_hub=not h.is_ductile,
+        Rms=s.Rm, Rmh=h.Rm, fracture_safety=inp.fracture_safety, shrink=inp.assembly == "shrink",
+        max_heating=h.max_heating_C if not math.isnan(h.max_heating_C) else np.inf,
+        T_shaft_cooled=inp.temperature_shaft_cooled if inp.temperature_shaft_cooled is not None else T0,
         press_force_limit=inp.press_force_limit if inp.press_force_limit is not None else np.inf)
+    return kwargs, "; ".join(src_parts), do_rule
+
+
+def evaluate(inp: PressFitInput) -> PressFitResult:
+    """Evaluate one press or shrink fit: cases, capacities, stresses, assembly and checks.
+
+    Warns with :class:`~fitcheck.errors.MethodRangeWarning` where the elastic method
+    does not hold (hub bore or shaft yielding) or a material needs caution.
+    """
+    kw, friction_source, do_rule = core_arguments(inp)
+    d, Do, mu_slip, mu_press = kw["d"], kw["Do"], kw["mu_slip"], kw["mu_press"]
+    imin, imax = kw["interference_min"], kw["interference_max"]
+    s, h = inp.shaft_material, inp.hub_material
+    brittle_s, brittle_h, shrink = kw["brittle_shaft"], kw["brittle_hub"], kw["shrink"]
+    max_heat, T0, w, jc = kw["max_heating"], kw["T_assembly"], kw["omega"], kw["joining_clearance"]
+    loss_rz = inp.smoothing_factor * (inp.rz_shaft + inp.rz_hub)
+    label = f"pressfit[{inp.name}]"
+    r = _core.evaluate(**kw)
     r = {k: (_f(v) if np.asarray(v).dtype != bool else bool(v)) for k, v in r.items()}
 
     args = (d, inp.length, inp.shaft_bore, Do, s, h, mu_slip, loss_rz)

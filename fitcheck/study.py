@@ -253,42 +253,8 @@ def core_arguments(inp) -> dict:
 
     if not isinstance(inp, pf.PressFitInput):
         raise InputError("joint", type(inp).__name__, "a PressFitInput (fitcheck.pressfit)")
-    if inp.shaft_material is None or inp.hub_material is None or math.isnan(inp.length):
-        raise InputError(f"pressfit[{inp.name}]", inp.name, "length, shaft_material and hub_material")
-    d, imin, imax = inp._limits()
-    if inp.diameter is not None:
-        d = inp.diameter
-    Do, _rule = inp.resolved_hub_outer_diameter()
-    s, h = inp.shaft_material, inp.hub_material
-    tab = pf.default_friction(s.group, h.group, inp.assembly)
-    if inp.mu_slip is None and tab is None:
-        raise InputError(f"pressfit[{inp.name}].mu_slip", None,
-                         f"a friction coefficient: {pf.FRICTION_TABLE} has none for {s.group} "
-                         f"in {h.group} ({inp.assembly})")
-    mu_slip = inp.mu_slip if inp.mu_slip is not None else tab[0]
-    if inp.mu_press is not None:
-        mu_press = inp.mu_press
-    elif inp.mu_slip is None and tab is not None:
-        mu_press = tab[1]
-    else:
-        mu_press = mu_slip
-    T0 = inp.temperature_assembly
-    return dict(
-        interference_min=imin, interference_max=imax, d=d, L=inp.length, di=inp.shaft_bore, Do=Do,
-        Es=s.E, nus=s.nu, alphas=s.alpha, Rps=s.Rp02, rhos=s.density,
-        Eh=h.E, nuh=h.nu, alphah=h.alpha, Rph=h.Rp02, rhoh=h.density,
-        mu_slip=mu_slip, mu_press=mu_press, rz_shaft=inp.rz_shaft, rz_hub=inp.rz_hub,
-        smoothing=inp.smoothing_factor, torque=inp.torque, axial_force=inp.axial_force,
-        slip_safety=inp.slip_safety, omega=inp.speed, T_shaft=inp.temperature_shaft,
-        T_hub=inp.temperature_hub, T_assembly=T0,
-        joining_clearance=inp.joining_clearance if inp.joining_clearance is not None else 1e-3 * d,
-        yield_safety=inp.yield_safety, brittle_shaft=not s.is_ductile, brittle_hub=not h.is_ductile,
-        Rms=s.Rm, Rmh=h.Rm, fracture_safety=inp.fracture_safety, shrink=inp.assembly == "shrink",
-        max_heating=h.max_heating_C if not math.isnan(h.max_heating_C) else np.inf,
-        T_shaft_cooled=inp.temperature_shaft_cooled if inp.temperature_shaft_cooled is not None else T0,
-        press_force_limit=inp.press_force_limit if inp.press_force_limit is not None else np.inf,
-        _nominal=d, _fit=inp.fit,
-    )
+    kwargs, _source, _rule = pf.core_arguments(inp)
+    return {**kwargs, "_nominal": kwargs["d"], "_fit": inp.fit}
 
 
 @dataclass(frozen=True)
