@@ -470,6 +470,27 @@ class Distribution:
                 return v
         raise KeyError(q)
 
+    def histogram(self) -> dict:
+        """The histogram as plain data for a chart: one row per bin and the finite limit lines.
+
+        Returns ``{"lo": [...], "hi": [...], "count": [...], "share": [...], "limits": ((label,
+        value), ...)}``: bin edges in :attr:`unit`, samples per bin, the share of the lot per bin
+        [%] and the limits with a finite positive value (those a plot can draw).
+
+        >>> d = Distribution("x", "x", "MPa", 2.0, 1.0, 1.0, 3.0, (), (1.0, 2.0, 3.0), (1, 3),
+        ...                  (("strength", 2.5), ("none", math.inf)))
+        >>> h = d.histogram()
+        >>> h["share"], h["limits"]
+        ([25.0, 75.0], (('strength', 2.5),))
+        """
+        edges = [float(e) for e in self.hist_edges]
+        counts = [int(c) for c in self.hist_counts]
+        total = sum(counts)
+        return {"lo": edges[:-1], "hi": edges[1:], "count": counts,
+                "share": [c / total * 100.0 if total else 0.0 for c in counts],
+                "limits": tuple((label, float(v)) for label, v in self.limits
+                                if v is not None and math.isfinite(v) and v > 0)}
+
     def to_dict(self) -> dict:
         return {"key": self.key, "label": self.label, "unit": self.unit, "mean": self.mean,
                 "std": self.std, "min": self.min, "max": self.max,

@@ -121,3 +121,46 @@ def waterfall(df: pd.DataFrame, *, stage: str, group: str, start: str, end: str,
     if title:
         spec["title"] = {"text": title, "fontSize": 13, "anchor": "start"}
     st.vega_lite_chart(df, spec, width="stretch", key=key)
+
+
+def unit_factor(unit: str, system: str) -> tuple[float, str]:
+    """Display magnitude of one ``unit`` (a result's own unit, e.g. ``"MPa"``) and the display
+    unit's symbol in ``system`` (``(0.145…, "ksi")`` for MPa in inch units)."""
+    from fitcheck.units import Q_
+
+    target = unitsys._target_unit(unit, system)  # the unit the tables of the system use
+    f = 1.0 if target == unit else float(Q_(1.0, unit).to(target).magnitude)
+    return f, unitsys.symbol(target)
+
+
+def histogram(hist: Mapping, *, x_title: str, scale: float = 1.0, key: str, height: int = 220,
+              title: str = "", y_title: str = "share of the lot [%]") -> None:
+    """Bars of a histogram the library computed (``Distribution.histogram()``) with its limits.
+
+    ``scale`` converts the bin edges and limit values to the display unit.
+    """
+    df = pd.DataFrame({"lo": [v * scale for v in hist["lo"]], "hi": [v * scale for v in hist["hi"]],
+                       "share": list(hist["share"]), "count": list(hist["count"])})
+    enc = {
+        "x": {"field": "lo", "type": "quantitative", "title": x_title,
+              "scale": {"zero": False}},
+        "x2": {"field": "hi"},
+        "y": {"field": "share", "type": "quantitative", "title": y_title},
+        "y2": {"datum": 0},
+        "tooltip": [{"field": "lo", "type": "quantitative", "format": ".4~g", "title": "from"},
+                    {"field": "hi", "type": "quantitative", "format": ".4~g", "title": "to"},
+                    {"field": "count", "type": "quantitative", "title": "samples"},
+                    {"field": "share", "type": "quantitative", "format": ".3~g",
+                     "title": "share [%]"}],
+    }
+    layers: list[dict] = [{"mark": {"type": "bar", "color": "#4a7a8c", "opacity": 0.75,
+                                    "binSpacing": 0}, "encoding": enc}]
+    for row, (text, value) in enumerate(hist["limits"]):
+        rule = _rule("x", value * scale, text)
+        rule["layer"][1]["encoding"]["y"] = {"value": 4 + 14 * row}  # labels of close lines apart
+        layers.append(rule)
+    spec = {"height": height, "layer": layers,
+            "config": {"axis": {"grid": True, "gridOpacity": 0.4}}}
+    if title:
+        spec["title"] = {"text": title, "fontSize": 13, "anchor": "start"}
+    st.vega_lite_chart(df, spec, width="stretch", key=key)
