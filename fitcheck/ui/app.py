@@ -36,6 +36,8 @@ PAGES: tuple[PageSpec, ...] = (
     PageSpec("bearing_seat", "Bearing seats", "bearing-seats", ":material/radio_button_checked:",
              "Joints"),
     PageSpec("housing_screws", "Housing screws", "housing-screws", ":material/hardware:", "Joints"),
+    PageSpec("lot_study", "Lot study and fit search", "lot-study", ":material/query_stats:",
+             "Studies"),
     PageSpec("whole_case", "Case verdict", "case-verdict", ":material/fact_check:", "Case"),
     PageSpec("case_file", "Case file and report", "case-file", ":material/description:", "Case"),
 )

@@ -53,7 +53,7 @@ def test_navigation_lists_every_page(app_test):
     at = app_test()
     at.switch_page("fitcheck/ui/case_file.py").run()  # raises when a page is not registered
     assert not at.exception
-    assert len(app.available()) == len(app.PAGES) == 6
+    assert len(app.available()) == len(app.PAGES) == 7
 
 
 # --------------------------------------------------------------------------- press fit

@@ -1,0 +1,697 @@
+"""Page "Lot study and fit search": how often a production lot slips or yields, and which fit to use.
+
+For a ``[[pressfit]]`` joint of the working case: the tolerance study of
+:func:`fitcheck.study.run_study` (sizes, friction, roughness and temperature
+sampled; probabilities of slip and yield with their intervals and the method
+behind them; a target verdict; percentiles and histograms; the worst case beside
+it) and the fit search of :func:`fitcheck.search.search_fits` (ranked passing
+fits, the nearest rejected ones, a button that puts a chosen fit into the case).
+For a ``[[bearing]]`` seat: the seat-class search of
+:func:`fitcheck.search.search_bearing_seat`.
+
+Both run on request only (a study with 10⁶ samples takes a second or more) and are
+cached on the joint's TOML text and the settings. No physics here: the page
+turns widget values into the library's settings and shows what it returns.
+"""
+
+from __future__ import annotations
+
+import math
+
+import pandas as pd
+import streamlit as st
+
+from fitcheck import case as casefile
+from fitcheck import fits, study
+from fitcheck.errors import InputError, InputErrors
+from fitcheck.search import search_bearing_seat, search_fits
+from fitcheck.tomlread import read_toml_bytes
+from fitcheck.ui import app, charts, joints, state, unitsys, widgets
+
+PREFIX = "ls"
+SAVED = f"{PREFIX}.saved"          # settings kept across page switches (Streamlit drops widgets)
+STUDY_RUN = f"{PREFIX}.study.run"  # (joint text, settings) of the last "Run study"
+SEARCH_RUN = f"{PREFIX}.search.run"  # joint text of the last "Search"
+TAKEN = f"{PREFIX}.taken"          # one-off message after a fit went into the case
+MAX_SAMPLES = 1_000_000            # in the browser (the library allows more, e.g. from the CLI)
+KINDS = {"pressfit": "press fit", "bearing": "bearing seat"}
+METHODS = {"plain": "plain sampling", "importance": "importance sampling about the FORM design "
+           "point", "form": "FORM (first order)", "bounds": "bounds of the inputs: out of reach"}
+SIZES = {"uniform": "uniform over the zone", "normal": "normal from Cp / Cpk"}
+SHIFTS = {"least_material": "toward least material (looser: the slip side)",
+          "max_material": "toward maximum material (tighter: the yield side)"}
+FRICTION = {"lognormal": "lognormal", "normal": "normal", "uniform": "uniform",
+            "constant": "constant (no scatter)"}
+SHOWN_PERCENTILES = (0.1, 1.0, 5.0, 50.0, 95.0, 99.0, 99.9)
+HISTOGRAMS = ("torque_capacity", "slip_safety", "hub_stress", "shaft_stress", "pressure_min",
+              "press_force")
+
+
+# --------------------------------------------------------------------------- library calls (cached)
+
+def _errs(exc: InputError | InputErrors) -> list[tuple]:
+    return [(e.field, e.value, e.allowed, e.hint) for e in state.errors_by_field(exc)]
+
+
+def _joint_input(text: str, table: str):
+    """The engine input of the one joint in a one-joint case text (raises on bad input)."""
+    dc = casefile.from_document(read_toml_bytes(text.encode("utf-8"), "case"))
+    return dc.pressfits[0] if table == "pressfit" else dc.bearings[0]
+
+
+@st.cache_data(show_spinner=False, max_entries=64)
+def _check_joint(text: str, table: str) -> list[tuple]:
+    """The input errors of the joint (empty when it reads)."""
+    try:
+        _joint_input(text, table)
+    except (InputError, InputErrors) as exc:
+        return _errs(exc)
+    return []
+
+
+@st.cache_data(show_spinner=False, max_entries=32)
+def _study(text: str, settings: tuple) -> tuple[study.StudyResult | None, list[tuple]]:
+    try:
+        inp = _joint_input(text, "pressfit")
+        return study.run_study(inp, study.StudySettings.from_mapping(dict(settings), "study")), []
+    except (InputError, InputErrors) as exc:
+        return None, _errs(exc)
+
+
+@st.cache_data(show_spinner=False, max_entries=64)
+def _search(text: str, table: str):
+    try:
+        inp = _joint_input(text, table)
+        return (search_fits(inp) if table == "pressfit" else search_bearing_seat(inp)), []
+    except (InputError, InputErrors) as exc:
+        return None, _errs(exc)
+
+
+def _settings_errors(settings: tuple) -> list[InputError]:
+    try:
+        study.StudySettings.from_mapping(dict(settings), "study")
+    except (InputError, InputErrors) as exc:
+        return state.errors_by_field(exc)
+    return []
+
+
+# --------------------------------------------------------------------------- the page
+
+def render() -> None:
+    app.heading("Lot study and fit search",
+                "How often a production lot of a press fit slips or yields when sizes, friction, "
+                "roughness and temperature scatter — and which ISO 286 fit (or bearing seat "
+                "class) passes every check.")
+    chosen = _pick()
+    if chosen is None:
+        return
+    table, name = chosen
+    text = state.doc_text(state.single_joint_doc(table, name))
+    bad = [InputError(*t) for t in _check_joint(text, table)]
+    if bad:
+        page = "Press fit" if table == "pressfit" else "Bearing seats"
+        st.error(f"This joint has input errors; correct them on the page *{page}* first.",
+                 icon=":material/error:")
+        for e in bad:
+            st.error(widgets.error_text(e), icon=":material/error:")
+        return
+    msg = st.session_state.pop(TAKEN, None)
+    if msg:
+        st.success(msg, icon=":material/check_circle:")
+    if table == "pressfit":
+        tab_study, tab_search = st.tabs(["Lot study", "Fit search"])
+        with tab_study:
+            _study_section(name, text)
+        with tab_search:
+            _fit_search_section(name, text)
+    else:
+        _seat_search_section(name, text)
+
+
+def _pick() -> tuple[str, str] | None:
+    """A selector over the press fits and bearing seats of the case."""
+    options = [(t, n) for t in KINDS for n in joints.names(t)]
+    if not options:
+        st.info("The open case has no press fit and no bearing seat. Open a case file that has "
+                "one (page *Case file and report*) or restore the demo there.")
+        return None
+    ss = st.session_state
+    key = f"{PREFIX}.joint"
+    labels = [f"{KINDS[t]}: {n}" for t, n in options]
+    stored = ss.get(f"{key}.value")
+    if ss.get(key) not in labels:
+        ss[key] = stored if stored in labels else labels[0]
+    label = st.selectbox("Joint of the case", labels, key=key,
+                         help="Press fits get the lot study and the fit search; bearing seats "
+                         "the search over seat classes.")
+    ss[f"{key}.value"] = label
+    return options[labels.index(label)]
+
+
+# --------------------------------------------------------------------------- lot study
+
+def _default_temperature(key: str) -> str:
+    cond = state.doc().get("conditions", {})
+    v = cond.get(key) if isinstance(cond, dict) else None
+    return widgets.as_text(v) if v is not None else ""
+
+
+#: Study settings shown on the page and their first values (StudySettings' own defaults; the
+#: temperature range from the case conditions).
+DEFAULTS = {"samples": 100_000, "seed": 0, "target": "1e-4", "sizes": "uniform", "cp": 1.33,
+            "cpk": 1.33, "shift": "least_material", "inspected": True, "friction": "lognormal",
+            "friction_cov": 0.15, "temperature_min": None, "temperature_max": None,
+            "roughness_low": 0.6, "confidence": 0.95, "rel_err": 0.1, "importance_samples": 20_000}
+
+
+def _seed_settings() -> None:
+    """Give every setting widget its value before it is drawn: the one kept from an earlier visit
+    (Streamlit forgets widgets of other pages) or the default."""
+    ss = st.session_state
+    saved = ss.get(SAVED, {})
+    for key, default in DEFAULTS.items():
+        k = f"{PREFIX}.{key}"
+        if k not in ss:
+            if key in saved:
+                ss[k] = saved[key]
+            elif key.startswith("temperature_"):
+                ss[k] = _default_temperature(key)
+            else:
+                ss[k] = default
+
+
+def _current_settings() -> tuple:
+    """The settings as (key, value) pairs for ``StudySettings.from_mapping`` (empty text = none)."""
+    ss = st.session_state
+    out = []
+    for key in DEFAULTS:
+        v = ss[f"{PREFIX}.{key}"]
+        if isinstance(v, str):
+            v = v.strip() or None
+        out.append((key, v))
+    return tuple(out)
+
+
+def _keep() -> None:
+    ss = st.session_state
+    ss[SAVED] = {key: ss[f"{PREFIX}.{key}"] for key in DEFAULTS}
+
+
+def _settings_widgets(errors: dict[str, InputError]) -> None:
+    """The study settings as widgets (seeded by :func:`_seed_settings`), each error below its field."""
+    ss = st.session_state
+
+    def err(key):
+        if key in errors:
+            st.error(widgets.error_text(errors[key]), icon=":material/error:")
+
+    c = st.columns(3)
+    with c[0]:
+        st.number_input("Samples", min_value=0, max_value=MAX_SAMPLES, step=10_000,
+                        key="ls.samples",
+                        help="Joints drawn at random (plain Monte Carlo), 100 to 1 000 000. "
+                        "Probabilities far below 1/samples come from FORM and importance "
+                        "sampling.")
+        err("samples")
+    with c[1]:
+        st.number_input("Random seed", min_value=0, step=1, key="ls.seed",
+                        help="The same seed gives the same lot, so a result can be repeated.")
+        err("seed")
+    with c[2]:
+        st.text_input("Target probability", key="ls.target",
+                      placeholder="none: the verdict is the worst case",
+                      help="Largest acceptable probability of slip and of yield, each (e.g. 1e-4). "
+                      "Met when the upper confidence limit is at or below it. Empty: no target.")
+        err("target")
+
+    st.markdown("**Sizes of shaft and bore**")
+    c = st.columns([3, 2, 2, 4])
+    with c[0]:
+        st.radio("Size model", list(SIZES), key="ls.sizes", format_func=SIZES.get,
+                 help="How shaft and bore sizes spread over their ISO 286 zones: evenly, or a "
+                 "normal distribution from the process capability.")
+        err("sizes")
+    normal = ss[f"{PREFIX}.sizes"] == "normal"
+    with c[1]:
+        st.number_input("Cp", min_value=0.0, max_value=20.0, step=0.01, format="%.2f",
+                        key="ls.cp", disabled=not normal,
+                        help="Process capability: zone width over six standard deviations.")
+        err("cp")
+    with c[2]:
+        st.number_input("Cpk", min_value=0.0, max_value=20.0, step=0.01, format="%.2f",
+                        key="ls.cpk", disabled=not normal,
+                        help="Capability to the nearer limit; Cpk < Cp moves the mean off the zone "
+                        "centre. 0 < Cpk ≤ Cp.")
+        err("cpk")
+    with c[3]:
+        st.selectbox("Mean shifted", list(SHIFTS), key="ls.shift",
+                     format_func=SHIFTS.get, disabled=not normal,
+                     help="Direction of the mean offset when Cpk < Cp.")
+        err("shift")
+        st.checkbox("Parts outside the zone sorted out at inspection", key="ls.inspected",
+                    disabled=not normal, help="The normal is cut off at the zone limits.")
+
+    st.markdown("**Friction and operating temperature**")
+    c = st.columns(4)
+    with c[0]:
+        st.selectbox("Friction scatter", list(FRICTION), key="ls.friction",
+                     format_func=FRICTION.get,
+                     help="Distribution of the friction coefficient; its median (lognormal) or "
+                     "mean is the joint's design value.")
+        err("friction")
+    with c[1]:
+        st.number_input("Friction CoV", min_value=0.0, max_value=1.0, step=0.01, format="%.2f",
+                        key="ls.friction_cov",
+                        help="Coefficient of variation of the friction coefficient (standard "
+                        "deviation over mean); 0.15 is common practice.")
+        err("friction_cov")
+    with c[2]:
+        st.text_input("Lowest operating temperature", key="ls.temperature_min",
+                      placeholder="the joint's own temperatures",
+                      help="Hub temperature range, sampled uniformly; the shaft keeps its "
+                      "stated excess over the hub. Taken from the case conditions when they give "
+                      "one; clear both ends to keep the joint's own temperatures.")
+        err("temperature_min")
+    with c[3]:
+        st.text_input("Highest operating temperature", key="ls.temperature_max",
+                      placeholder="the joint's own temperatures",
+                      help="Upper end of the hub temperature range, e.g. '60 degC'.")
+        err("temperature_max")
+
+    with st.expander("More settings", expanded=any(k in errors for k in (
+            "roughness_low", "confidence", "rel_err", "importance_samples"))):
+        c = st.columns(4)
+        with c[0]:
+            st.number_input("Lowest Rz, share of the drawing value", min_value=0.0,
+                            max_value=1.0, step=0.05, format="%.2f",
+                            key="ls.roughness_low",
+                            help="Rz of shaft and bore spreads evenly between this share of the "
+                            "drawing value and the drawing value; 1 keeps Rz fixed.")
+            err("roughness_low")
+        with c[1]:
+            st.number_input("Confidence level", min_value=0.0, max_value=1.0, step=0.01,
+                            format="%.3f", key="ls.confidence",
+                            help="Two-sided level of the probability intervals.")
+            err("confidence")
+        with c[2]:
+            st.number_input("Relative error for the sample count", min_value=0.0,
+                            max_value=1.0, step=0.05, format="%.2f", key="ls.rel_err",
+                            help="The plain-sampling sample count is given for this relative "
+                            "error of the estimate.")
+            err("rel_err")
+        with c[3]:
+            st.number_input("Importance samples", min_value=0, max_value=MAX_SAMPLES, step=1000,
+                            key="ls.importance_samples",
+                            help="Samples about the FORM design point for small probabilities; "
+                            "0 switches FORM and importance sampling off.")
+            err("importance_samples")
+    _keep()
+
+
+def _settings_error_map(settings: tuple) -> tuple[dict[str, InputError], list[InputError]]:
+    by_key, rest = {}, []
+    names = {k for k, _ in settings}
+    for e in _settings_errors(settings):
+        key = e.field.removeprefix("study.").split(".")[0].split("[")[0]
+        if key in names and key not in by_key:
+            by_key[key] = e
+        else:
+            rest.append(e)
+    return by_key, rest
+
+
+def _study_section(name: str, text: str) -> None:
+    ss = st.session_state
+    _seed_settings()
+    settings = _current_settings()  # Streamlit holds a changed value before the rerun
+    by_key, rest = _settings_error_map(settings)
+    with st.container(border=True):
+        _settings_widgets(by_key)
+        for e in rest:
+            st.error(widgets.error_text(e), icon=":material/error:")
+        run = st.button("Run study", key=f"{PREFIX}.run_study", type="primary",
+                        disabled=bool(by_key or rest), icon=":material/casino:",
+                        help="Draw the lot and estimate the probabilities (on request: a large "
+                        "study takes a few seconds).")
+    key = (text, settings)
+    if run:
+        ss[STUDY_RUN] = key
+    if ss.get(STUDY_RUN) != key:
+        if STUDY_RUN in ss:
+            st.info("The joint or the settings changed since the last run: press **Run study** "
+                    "for results that match them.")
+        else:
+            st.info("Set the scatter of the lot and press **Run study**.")
+        return
+    with st.spinner("Sampling the lot …"):
+        r, errs = _study(text, settings)
+    if r is None:
+        for t in errs:
+            st.error(widgets.error_text(InputError(*t)), icon=":material/error:")
+        return
+    _study_results(r, state.system(), name)
+
+
+def p_text(x: float) -> str:
+    """A probability as shown on the page: three significant digits, 0 as 0."""
+    if x != x:
+        return "n/a"
+    return "0" if x == 0 else f"{x:.3g}"
+
+
+def _study_results(r: study.StudyResult, system: str, name: str) -> None:
+    s = r.settings
+    st.subheader(f"{r.joint}: {r.fit or 'given interference'} — {r.samples:,} samples, "
+                 f"seed {s.seed}")
+    if r.targets:
+        worst = max(r.checks, key=lambda c: c.value / c.limit if c.limit else math.inf)
+        ok = r.ok
+        text = ("Both targets are met" if ok else "A target is not met") + \
+            f": P(slip) and P(yield), upper {s.confidence:.0%} limits against {p_text(s.target)}" \
+            + ("" if ok else f" — {worst.name} {p_text(worst.value)}") + "."
+        (st.success if ok else st.error)(text, icon=":material/check_circle:" if ok
+                                         else ":material/cancel:")
+    lot, wc = st.columns([3, 2], gap="large")
+    with lot:
+        st.markdown("**The lot (sampled)**")
+        c = st.columns(3)
+        for col, fm, label in ((c[0], r.slip, "P(slip)"), (c[1], r.yield_, "P(yield)")):
+            b = fm.best
+            col.metric(label, p_text(b.p), help=fm.definition)
+            col.caption(f"{s.confidence:.0%} interval {p_text(b.lo)} … {p_text(b.hi)}  \n"
+                        f"by {METHODS.get(b.method, b.method)}")
+        c[2].metric("Lot passing all checks", f"{r.fraction_meeting_design_checks * 100:.5g} %",
+                    help="Share of the sampled joints meeting every check with its required "
+                    "safety (slip safety, yield safety, speed, assembly).")
+    with wc:
+        w = r.worst_case
+        st.markdown("**Worst case (limits stacked)**")
+        c = st.columns(2)
+        c[0].metric("Slip safety, loosest", unitsys.num(w.slip_safety_min, 3))
+        c[1].metric("Torque capacity, loosest", unitsys.show(w.torque_capacity_min, "torque",
+                                                             system))
+        c = st.columns(2)
+        c[0].metric("Hub yield safety, tightest", unitsys.num(w.hub_yield_safety, 3))
+        c[1].metric("Shaft yield safety, tightest", unitsys.num(w.shaft_yield_safety, 3))
+        widgets.verdict_banner(w.ok, min(w.checks, key=lambda c: c.margin) if w.checks else None,
+                               system)
+        st.caption("Loosest shaft in the largest bore with the lowest friction, and the reverse, "
+                   "at the joint's own temperatures: safe, but silent on how often a lot fails.")
+    st.markdown("**Failure probabilities**")
+    _probability_table(r)
+    if r.targets:
+        _target_table(r)
+    st.markdown("**Percentiles of the lot**")
+    _percentile_table(r, system)
+    st.markdown("**Histograms** (the tails beyond 0.01 % and 99.99 % fall in the end bins)")
+    cols = st.columns(2)
+    for i, key in enumerate(HISTOGRAMS):
+        d = r.distribution(key)
+        if not d.hist_edges:
+            continue
+        f, sym = charts.unit_factor(d.unit, system) if d.unit else (1.0, "")
+        with cols[i % 2]:
+            charts.histogram(_named_limits(d.histogram(), r), x_title=d.label + (f" [{sym}]" if sym else ""),
+                             scale=f, key=f"{PREFIX}.{name}.hist.{key}", title=d.label)
+    with st.expander("Random inputs of the study"):
+        st.dataframe(pd.DataFrame([{"input": v.name, "distribution": _marginal_text(v, system),
+                                    "meaning": v.description} for v in r.variables]),
+                     hide_index=True, width="stretch", key=f"{PREFIX}.variables")
+    for n in r.notes:
+        st.caption(f"Note: {n}")
+
+
+def _named_limits(hist: dict, r: study.StudyResult) -> dict:
+    """The strength lines named by the material value they are (Rp0.2 or Rm of which material)."""
+    w = r.worst_case
+    names = {}
+    for part, m in (("hub", w.hub_material), ("shaft", w.shaft_material)):
+        names.setdefault(f"{part} strength", {})
+        names[f"{part} strength"][m.Rp02] = f"Rp0.2 {part} ({m.name})"
+        names[f"{part} strength"][m.Rm] = f"Rm {part} ({m.name})"
+    limits = tuple((names.get(t, {}).get(v, t), v) for t, v in hist["limits"])
+    return {**hist, "limits": limits}
+
+
+def _probability_table(r: study.StudyResult) -> None:
+    s = r.settings
+    rows = []
+    for fm in (r.slip, r.yield_):
+        pl, f, imp = fm.plain, fm.form, fm.importance
+        rows.append({
+            "mode": fm.name,
+            "plain sampling": f"{pl.failures:,} of {pl.n:,} = {p_text(pl.p)}",
+            f"{s.confidence:.0%} interval": f"{p_text(pl.lo)} … {p_text(pl.hi)}",
+            "FORM": "—" if f is None else (f"β = {f.beta:.3g}, p = {p_text(f.p)}"
+                                           + ("" if f.converged else " (not converged)")),
+            "importance sampling": "—" if imp is None else f"{p_text(imp.p)} ± {p_text(imp.se)}",
+            "used": f"{METHODS.get(fm.best.method, fm.best.method)}",
+        })
+    st.dataframe(pd.DataFrame(rows), hide_index=True, width="stretch", key=f"{PREFIX}.probabilities")
+
+
+def _target_table(r: study.StudyResult) -> None:
+    s = r.settings
+    rows = [{"mode": t.mode, "estimate": p_text(t.estimate),
+             f"upper {s.confidence:.0%} limit": p_text(t.upper), "target": p_text(t.target),
+             "verdict": widgets.PASS if t.met else widgets.FAIL,
+             f"plain samples for ±{s.rel_err:.0%} at the target":
+                 f"{t.plain_samples_at_target:,.0f}"} for t in r.targets]
+    st.dataframe(widgets.styled(pd.DataFrame(rows)), hide_index=True, width="stretch",
+                 key=f"{PREFIX}.targets")
+    need = max(t.plain_samples_at_target for t in r.targets)
+    if need > r.samples:
+        st.caption(f"Plain sampling alone would need about {need:,.0f} samples to resolve the "
+                   f"target to ±{s.rel_err:.0%}; this run has {r.samples:,} — the smaller "
+                   "probabilities come from FORM and importance sampling (see *used*).")
+
+
+def _percentile_table(r: study.StudyResult, system: str) -> None:
+    rows = []
+    for d in r.distributions:
+        row = {"quantity": d.label}
+        for q in SHOWN_PERCENTILES:
+            row[f"{q:g} %"] = unitsys.show_in(d.percentile(q), d.unit, system)
+        row["mean"] = unitsys.show_in(d.mean, d.unit, system)
+        rows.append(row)
+    st.dataframe(pd.DataFrame(rows), hide_index=True, width="stretch", key=f"{PREFIX}.percentiles",
+                 height=widgets.table_height(len(rows)))
+
+
+def _marginal_text(v, system: str) -> str:
+    m = v.marginal
+
+    def q(x):
+        return unitsys.show_in(x, v.unit, system) if v.unit else unitsys.num(x, 4)
+
+    if not m.random:
+        return f"fixed {q(m.a)}"
+    if m.kind == "uniform":
+        return f"uniform {q(m.a)} … {q(m.b)}"
+    if m.kind == "normal":
+        return f"normal, mean {q(m.a)}, standard deviation {unitsys.num(m.b, 3)} {v.unit}".strip()
+    if m.kind == "truncnormal":
+        return (f"normal, mean {q(m.a)}, standard deviation {unitsys.num(m.b, 3)} {v.unit}, "
+                f"cut off at {q(m.c)} … {q(m.d)}")
+    return f"lognormal, median {q(m.a)}, CoV {unitsys.num(m.b, 3)}"
+
+
+# --------------------------------------------------------------------------- fit search
+
+def _current_classes(entry: dict | None) -> tuple[str | None, str | None, str | None]:
+    """(hole, shaft, size text) of the joint's fit, or Nones when it gives an interference."""
+    text = entry.get("fit") if entry else None
+    if not isinstance(text, str):
+        return None, None, None
+    try:
+        d = fits.parse(text)
+    except InputError:
+        return None, None, None
+    if not (d.hole and d.shaft):
+        return None, None, None
+    return d.hole, d.shaft, text.strip().split(d.hole)[0].strip()
+
+
+def _take_fit(name: str, hole: str, shaft: str, nominal_mm: float) -> None:
+    """Write the chosen fit into the joint of the working case (as the press-fit class pickers do)."""
+    entry = state.joint("pressfit", name)
+    if entry is None:
+        return
+    ss = st.session_state
+    size = _current_classes(entry)[2] or f"{nominal_mm:g}"
+    text = f"{size} {hole}/{shaft}"
+    entry["fit"] = text
+    ss[joints.wkey("pf", name, "fit")] = text
+    dropped = [k for k in ("interference_min", "interference_max") if k in entry]
+    for k in dropped:  # a fit replaces explicit interference limits
+        entry.pop(k)
+        ss[joints.wkey("pf", name, k)] = ""
+    ss[SEARCH_RUN] = state.doc_text(state.single_joint_doc("pressfit", name))
+    ss[TAKEN] = (f"Fit **{text}** is now the fit of *{name}* in the case"
+                 + (" (its interference limits were removed)" if dropped else "")
+                 + "; the page *Press fit* shows it.")
+
+
+def _search_button(label: str, text: str) -> bool:
+    ss = st.session_state
+    if st.button(label, key=f"{PREFIX}.run_search", type="primary", icon=":material/search:"):
+        ss[SEARCH_RUN] = text
+    if ss.get(SEARCH_RUN) != text:
+        if SEARCH_RUN in ss:
+            st.info(f"The joint changed since the last search: press **{label}** again.")
+        return False
+    return True
+
+
+def _fit_search_section(name: str, text: str) -> None:
+    st.caption("Every hole-basis fit (H6, H7, H8 with shafts of grades 5 to 7) and shaft-basis fit "
+               "(h5, h6, h7 with holes of grades 6 to 8) that ISO 286 defines at the joint's "
+               "size, with the checks and required safeties of the press-fit page.")
+    if not _search_button("Search fits", text):
+        return
+    r, errs = _search(text, "pressfit")
+    if r is None:
+        for t in errs:
+            st.error(widgets.error_text(InputError(*t)), icon=":material/error:")
+        return
+    system = state.system()
+    entry = state.joint("pressfit", name)
+    hole, shaft, _ = _current_classes(entry)
+    own = f"{hole}/{shaft}" if hole else None
+    st.subheader(f"{r.joint}: {len(r.passing)} of {r.evaluated} fits at "
+                 f"Ø {unitsys.show(r.nominal_mm, 'length', system)} pass every check")
+    if own:
+        rank = next((c.rank for c in r.passing if f"{c.hole}/{c.shaft}" == own), None)
+        rej = next((c for c in r.rejected if f"{c.hole}/{c.shaft}" == own), None)
+        if rank:
+            st.caption(f"The joint's own fit {own} ranks #{rank} of {len(r.passing)}.")
+        elif rej:
+            st.caption(f"The joint's own fit {own} fails: {_failing(rej)}.")
+    if r.passing:
+        shrink = (entry or {}).get("assembly") == "shrink"
+        rows = []
+        for c in r.passing:
+            row = {"rank": c.rank, "fit": f"{c.hole}/{c.shaft}", "preferred": "★" if c.preferred
+                   else "", "in the case": "●" if f"{c.hole}/{c.shaft}" == own else "",
+                   "basis": c.basis,
+                   "interference": _range(c.interference_min_um, c.interference_max_um, "um",
+                                          system),
+                   "slip safety, loosest": unitsys.num(c.slip_safety_min, 3),
+                   "hub yield safety": unitsys.num(c.hub_yield_safety, 3),
+                   "shaft yield safety": unitsys.num(c.shaft_yield_safety, 3)}
+            if shrink:
+                row["hub heating to"] = unitsys.show_in(c.shrink_temperature, "degC", system)
+            else:
+                row["press-in force, largest"] = unitsys.show_in(c.press_force_max, "N", system)
+            row["pressure"] = _range(c.pressure_min, c.pressure_max, "MPa", system)
+            rows.append(row)
+        st.markdown("**Passing fits** (largest slip safety at the loosest fit first; "
+                    "★ preferred fit)")
+        small = st.column_config.TextColumn(width="small")
+        st.dataframe(pd.DataFrame(rows), hide_index=True, width="stretch",
+                     key=f"{PREFIX}.passing", height=widgets.table_height(min(len(rows), 12)),
+                     column_config={"rank": st.column_config.NumberColumn(width="small"),
+                                    "preferred": small, "in the case": small, "basis": small})
+        _take_picker(name, r, own)
+    if r.rejected:
+        rows = [{"fit": f"{c.hole}/{c.shaft}", "preferred": "★" if c.preferred else "",
+                 "interference": _range(c.interference_min_um, c.interference_max_um, "um",
+                                        system),
+                 "slip safety, loosest": unitsys.num(c.slip_safety_min, 3),
+                 "fails (margin)": _failing(c)} for c in r.rejected[:10]]
+        st.markdown("**Nearest rejected fits** (the nearest to passing first)")
+        st.dataframe(pd.DataFrame(rows), hide_index=True, width="stretch",
+                     key=f"{PREFIX}.rejected", height=widgets.table_height(len(rows)),
+                     column_config={"fails (margin)": st.column_config.TextColumn(width="large")})
+    for n in r.notes:
+        st.caption(f"Note: {n}")
+
+
+def _take_picker(name: str, r, own: str | None) -> None:
+    ss = st.session_state
+    labels = {f"{c.hole}/{c.shaft}": c for c in r.passing}
+    key = f"{PREFIX}.take"
+    if ss.get(key) not in labels:
+        ss[key] = next(iter(labels))
+    c = st.columns([2, 3], vertical_alignment="bottom")
+    chosen = c[0].selectbox("Fit to use", list(labels), key=key,
+                            format_func=lambda f: f"#{labels[f].rank} {f}"
+                            + (" ★" if labels[f].preferred else ""),
+                            help="A passing fit to put into the joint of the case.")
+    cand = labels[chosen]
+    c[1].button("Use this fit in the case", key=f"{PREFIX}.take.button", disabled=chosen == own,
+                on_click=_take_fit, args=(name, cand.hole, cand.shaft, r.nominal_mm),
+                icon=":material/input:",
+                help="Writes the fit into the joint of the working case; the page *Press fit* "
+                "then evaluates it.")
+
+
+def _failing(c) -> str:
+    parts = []
+    for n, m in c.failing:
+        parts.append(f"{n} ({m * 100:+.1f} %)" if math.isfinite(m) else n)
+    return "; ".join(parts)
+
+
+def _range(lo: float, hi: float, unit: str, system: str) -> str:
+    a, b = unitsys.show_in(lo, unit, system), unitsys.show_in(hi, unit, system)
+    sym = b.split(" ", 1)[1] if " " in b else ""
+    return f"{a.split(' ', 1)[0]} … {b}" if sym and a.endswith(sym) else f"{a} … {b}"
+
+
+# --------------------------------------------------------------------------- bearing seats
+
+def _take_seat(name: str, seat: str, cls: str) -> None:
+    entry = state.joint("bearing", name)
+    if entry is None:
+        return
+    entry[seat] = cls
+    st.session_state[joints.wkey("br", name, seat)] = cls
+    st.session_state[SEARCH_RUN] = state.doc_text(state.single_joint_doc("bearing", name))
+    st.session_state[TAKEN] = (f"Seat class **{cls}** is now the {seat} seat of *{name}* in the "
+                               "case; the page *Bearing seats* shows it.")
+
+
+def _seat_search_section(name: str, text: str) -> None:
+    st.caption("Each shaft class (g … r, grades 5 and 6) with the housing as given, and each "
+               "housing class (G … P, grades 6 and 7) with the shaft as given, checked by the "
+               "bearing-seat engine. The lot study covers press fits.")
+    if not _search_button("Search seat classes", text):
+        return
+    r, errs = _search(text, "bearing")
+    if r is None:
+        for t in errs:
+            st.error(widgets.error_text(InputError(*t)), icon=":material/error:")
+        return
+    st.subheader(f"{r.joint}: bearing {r.designation}, given shaft {r.shaft_given}, "
+                 f"housing {r.housing_given}")
+    for seat, items, given in (("shaft", r.shafts, r.shaft_given),
+                               ("housing", r.housings, r.housing_given)):
+        rows = [{"rank": c.rank if c.ok else "—", "class": c.cls,
+                 "recommended": "★" if c.recommended else "",
+                 "in the case": "●" if c.cls == given else "",
+                 "operating clearance": _range(*c.operating_clearance_um, "um", state.system()),
+                 "ring grip, loosest": unitsys.show_in(c.grip_um, "um", state.system())
+                 + ("" if c.grips else " (may creep)"),
+                 "verdict": widgets.PASS if c.ok else widgets.FAIL,
+                 "fails (margin)": _failing(c)} for c in items]
+        st.markdown(f"**{seat.capitalize()} classes** ({'housing' if seat == 'shaft' else 'shaft'}"
+                    " as given; passing ranked first; ★ recommended)")
+        st.dataframe(widgets.styled(pd.DataFrame(rows)), hide_index=True, width="stretch",
+                     key=f"{PREFIX}.{seat}s", height=widgets.table_height(min(len(rows), 12)))
+        good = [c.cls for c in items if c.ok]
+        if good:
+            ss, key = st.session_state, f"{PREFIX}.take.{seat}"
+            if ss.get(key) not in good:
+                ss[key] = good[0]
+            c = st.columns([2, 3], vertical_alignment="bottom")
+            chosen = c[0].selectbox(f"{seat.capitalize()} class to use", good, key=key)
+            c[1].button(f"Use this {seat} class in the case", key=f"{key}.button",
+                        disabled=chosen == given, on_click=_take_seat, args=(name, seat, chosen),
+                        icon=":material/input:")
+    for n in r.notes:
+        st.caption(f"Note: {n}")
+
+
+if __name__ == "__main__":
+    render()
