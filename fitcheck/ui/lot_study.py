@@ -571,9 +571,10 @@ def _fit_search_section(name: str, text: str) -> None:
         shrink = (entry or {}).get("assembly") == "shrink"
         rows = []
         for c in r.passing:
-            row = {"rank": c.rank, "fit": f"{c.hole}/{c.shaft}", "preferred": "★" if c.preferred
-                   else "", "in the case": "●" if f"{c.hole}/{c.shaft}" == own else "",
-                   "basis": c.basis,
+            marks = (["★ preferred"] if c.preferred else []) + \
+                (["● in the case"] if f"{c.hole}/{c.shaft}" == own else [])
+            row = {"rank": c.rank, "fit": f"{c.hole}/{c.shaft}", "basis": c.basis,
+                   "note": ", ".join(marks),
                    "interference": _range(c.interference_min_um, c.interference_max_um, "um",
                                           system),
                    "slip safety, loosest": unitsys.num(c.slip_safety_min, 3),
@@ -587,14 +588,11 @@ def _fit_search_section(name: str, text: str) -> None:
             rows.append(row)
         st.markdown("**Passing fits** (largest slip safety at the loosest fit first; "
                     "★ preferred fit)")
-        small = st.column_config.TextColumn(width="small")
         st.dataframe(pd.DataFrame(rows), hide_index=True, width="stretch",
-                     key=f"{PREFIX}.passing", height=widgets.table_height(min(len(rows), 12)),
-                     column_config={"rank": st.column_config.NumberColumn(width="small"),
-                                    "preferred": small, "in the case": small, "basis": small})
+                     key=f"{PREFIX}.passing", height=widgets.table_height(min(len(rows), 12)))
         _take_picker(name, r, own)
     if r.rejected:
-        rows = [{"fit": f"{c.hole}/{c.shaft}", "preferred": "★" if c.preferred else "",
+        rows = [{"fit": f"{c.hole}/{c.shaft}", "note": "★ preferred" if c.preferred else "",
                  "interference": _range(c.interference_min_um, c.interference_max_um, "um",
                                         system),
                  "slip safety, loosest": unitsys.num(c.slip_safety_min, 3),

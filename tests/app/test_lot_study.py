@@ -176,7 +176,7 @@ def test_taking_a_fit_writes_it_into_the_case(app_test):
     assert "case" in at.query_params  # the changed case is kept in the address
     # the search stays on screen and marks the fit now in the case
     passing = _frame_by_columns(at, "rank")
-    assert passing.loc[passing["fit"] == fit, "in the case"].iloc[0] == "●"
+    assert "in the case" in passing.loc[passing["fit"] == fit, "note"].iloc[0]
     at.switch_page("fitcheck/ui/press_fit.py").run()
     assert at.text_input(key=f"pf.{PF}.fit").value == f"16 {fit}"
     doc = demo_doc()
