@@ -30,6 +30,7 @@ from . import CAUTION, __version__
 from .case import CaseResult, DesignCase, JointResult, evaluate
 from .checks import Check
 from .errors import InputError
+from .units import plain
 
 __all__ = ["Report", "build", "to_html", "to_pdf", "write", "FORMATS"]
 
@@ -124,7 +125,7 @@ def format_number(x: float, unit: str = "") -> str:
         return "n/a"
     if math.isinf(xf):
         return ("∞" if xf > 0 else "−∞") + (f" {unit}" if unit else "")
-    return f"{xf:.4g}" + (f" {unit}" if unit else "")
+    return plain(xf) + (f" {unit}" if unit else "")
 
 
 def format_margin(m: float) -> str:

@@ -250,8 +250,32 @@ def quantity(value: float, kind: str, to: str | None = None):
     return q.to(to) if to else q
 
 
+def plain(x: float, digits: int = 4) -> str:
+    """A number to ``digits`` significant figures, in plain notation from 1e-4 up to 1e7.
+
+    Engineers read ``42880 rpm`` faster than ``4.288e+04 rpm``; very small and very
+    large values keep the exponent.
+
+    >>> plain(42876.5), plain(4.2876), plain(0.012345), plain(2.5e8), plain(0.0)
+    ('42880', '4.288', '0.01235', '2.5e+08', '0')
+    """
+    xf = float(x)
+    if xf == 0.0 or not math.isfinite(xf):
+        return f"{xf:g}"
+    a = abs(xf)
+    if not 1e-4 <= a < 1e7:
+        return f"{xf:.{digits}g}"
+    exp = math.floor(math.log10(a))
+    decimals = max(0, digits - 1 - exp)
+    rounded = round(xf, decimals if decimals else digits - 1 - exp)
+    text = f"{rounded:.{decimals}f}"
+    if "." in text:
+        text = text.rstrip("0").rstrip(".")
+    return text
+
+
 def fmt(value: float, unit: str, digits: int = 4) -> str:
     """Format a core-unit float with its unit for display: ``fmt(12.5, "mm") -> '12.5 mm'``."""
     if value is None or (isinstance(value, float) and not math.isfinite(value)):
         return f"{value} {unit}".strip()
-    return f"{value:.{digits}g} {unit}".strip()
+    return f"{plain(value, digits)} {unit}".strip()
