@@ -107,7 +107,9 @@ def init() -> None:
             return
         except InputError as exc:
             ss[NOTICE] = f"The case in the address could not be read ({exc.message}); the demo is open."
-    ss[DOC] = demo_doc()
+    demo = demo_doc()
+    # the demo is written in SI: an address asking for inch units gets it in inch, like the switch
+    ss[DOC] = demo if ss[UNITS] == "SI" else _convert(demo, ss[UNITS], ss.setdefault(MEMO, {}))
 
 
 def doc() -> dict:

@@ -286,6 +286,15 @@ def test_unit_switch_rewrites_inputs_and_results_and_back(app_test):
     assert "case" not in at.query_params  # the very same case as the demo again
 
 
+def test_an_inch_address_without_a_case_opens_the_demo_in_inch(app_test):
+    at = app_test("press_fit", query={"u": "inch"})
+    assert not at.exception
+    assert at.text_input(key=f"pf.{PF}.length").value.endswith(" in")
+    r = library_result(demo_doc(), "pressfit", PF)
+    assert metrics(at)["Torque capacity, loosest"] == unitsys.show(r.torque_capacity_min, "torque",
+                                                                   "inch")
+
+
 # --------------------------------------------------------------------------- case file
 
 def test_case_upload_replaces_the_case(app_test):
