@@ -22,7 +22,7 @@ import pandas as pd
 import streamlit as st
 
 from fitcheck import case as casefile
-from fitcheck import fits, study
+from fitcheck import checks, fits, study
 from fitcheck.errors import InputError, InputErrors
 from fitcheck.search import search_bearing_seat, search_fits
 from fitcheck.tomlread import read_toml_bytes
@@ -364,7 +364,7 @@ def _study_results(r: study.StudyResult, system: str, name: str) -> None:
     st.subheader(f"{r.joint}: {r.fit or 'given interference'} — {r.samples:,} samples, "
                  f"seed {s.seed}")
     if r.targets:
-        worst = max(r.checks, key=lambda c: c.value / c.limit if c.limit else math.inf)
+        worst = checks.worst(r.checks)  # the smallest margin
         ok = r.ok
         text = ("Both targets are met" if ok else "A target is not met") + \
             f": P(slip) and P(yield), upper {s.confidence:.0%} limits against {p_text(s.target)}" \
