@@ -124,8 +124,17 @@ def format_number(x: float, unit: str = "") -> str:
     if math.isnan(xf):
         return "n/a"
     if math.isinf(xf):
-        return ("∞" if xf > 0 else "−∞") + (f" {unit}" if unit else "")
-    return plain(xf) + (f" {unit}" if unit else "")
+        return ("∞" if xf > 0 else "−∞") + (f" {unit_text(unit)}" if unit else "")
+    return plain(xf) + (f" {unit_text(unit)}" if unit else "")
+
+
+#: How a unit of a :class:`~fitcheck.checks.Check` is printed.
+_UNIT_TEXT = {"um": "µm", "degC": "°C", "N*m": "N·m", "N*mm": "N·mm", "delta_degC": "K"}
+
+
+def unit_text(unit: str) -> str:
+    """A check's unit as printed: ``unit_text("um") -> 'µm'``."""
+    return _UNIT_TEXT.get(unit, unit)
 
 
 def format_margin(m: float) -> str:
