@@ -13,7 +13,7 @@ import math
 import pandas as pd
 import streamlit as st
 
-from fitcheck import bearings
+from fitcheck import bearings, checks
 from fitcheck.errors import InputError
 from fitcheck.ui import app, charts, joints, state, unitsys, widgets
 from fitcheck.ui.joints import Field
@@ -99,7 +99,7 @@ def _suggestion(name: str, entry: dict) -> None:
 
 
 def _results(r: bearings.BearingSeatResult, system: str, name: str) -> None:
-    widgets.verdict_banner(r.ok, min(r.checks, key=lambda c: c.margin) if r.checks else None,
+    widgets.verdict_banner(r.ok, checks.worst(r.checks),
                            system)
     st.subheader(f"{r.designation}: shaft {r.shaft_class}, housing {r.housing_class}")
     c = st.columns(2)

@@ -11,7 +11,7 @@ import copy
 import pandas as pd
 import streamlit as st
 
-from fitcheck import materials, screws, threads
+from fitcheck import checks, materials, screws, threads
 from fitcheck.ui import app, charts, joints, state, unitsys, widgets
 from fitcheck.ui.joints import Field
 
@@ -146,7 +146,7 @@ def render() -> None:
 
 
 def _summary(r: screws.ScrewJointResult, system: str, name: str) -> None:
-    widgets.verdict_banner(r.ok, min(r.checks, key=lambda c: c.margin) if r.checks else None,
+    widgets.verdict_banner(r.ok, checks.worst(r.checks),
                            system)
     st.subheader(f"{r.name or 'Joint'}: {r.thread} – {r.property_class}")
     f = lambda x: unitsys.show(x, "force", system)  # noqa: E731

@@ -11,7 +11,7 @@ from __future__ import annotations
 import pandas as pd
 import streamlit as st
 
-from fitcheck import fits, pressfit
+from fitcheck import checks, fits, pressfit
 from fitcheck.errors import InputError
 from fitcheck.ui import app, charts, joints, state, unitsys, widgets
 from fitcheck.ui.joints import Field
@@ -100,7 +100,7 @@ def render() -> None:
 
 
 def _summary(r: pressfit.PressFitResult, system: str, name: str) -> None:
-    widgets.verdict_banner(r.ok, min(r.checks, key=lambda c: c.margin) if r.checks else None,
+    widgets.verdict_banner(r.ok, checks.worst(r.checks),
                            system)
     st.subheader(f"{r.name or 'Joint'}: {r.fit or 'given interference'}, "
                  f"Ø {unitsys.show(r.diameter, 'length', system)} × "
