@@ -85,18 +85,18 @@ def render() -> None:
     jr, errors, msgs = joints.evaluate(TABLE, name)
     system = state.system()
     left, right = st.columns([2, 3], gap="large")
+    # the results column is filled first, so the verdict shows while the inputs are still drawn
+    with right:
+        if jr is None:
+            st.info("Correct the inputs marked with the error sign to see the results.")
+        else:
+            _summary(jr.result, system, name)
+            widgets.warnings_box(msgs)
     with left:
         _class_pickers(name, entry)
         joints.draw_inputs(TABLE, PREFIX, name, groups, pressfit.KEYS, errors, expanded=2)
-    if jr is None:
-        with right:
-            st.info("Correct the inputs marked with the error sign to see the results.")
-        return
-    r = jr.result
-    with right:
-        _summary(r, system, name)
-        widgets.warnings_box(msgs)
-    _details(r, system, name)
+    if jr is not None:
+        _details(jr.result, system, name)
 
 
 def _summary(r: pressfit.PressFitResult, system: str, name: str) -> None:
