@@ -412,7 +412,8 @@ class _PdfPages:
 
     def heading(self, s: str, style: str = "h2"):
         lines = self.wrap(s, _A4[0] - 2 * _MARGIN, style, bold=True)
-        self._need(_LINE[style] * (len(lines) + 2.5))
+        # keep the heading with what follows it: a table's header row and its first rows
+        self._need(_LINE[style] * (len(lines) + 1) + 6 * _LINE["body"])
         self.y -= _LINE[style] * 0.5
         for ln in lines:
             self._text(_MARGIN, ln, style, weight="bold")
