@@ -397,6 +397,10 @@ def test_blocked_evaluation_equals_direct():
               Rps=490.0, Eh=E, nuh=0.3, Rph=490.0, mu_slip=0.1, omega=rng.uniform(0.0, 900.0, n),
               torque=5000.0, brittle_hub=rng.uniform(size=n) > 0.5, Rmh=250.0)
     blocked = core.evaluate(**kw)
-    direct = core._block(**kw)
+    import inspect
+
+    defaults = {name: p.default for name, p in inspect.signature(core.evaluate).parameters.items()
+                if p.default is not inspect.Parameter.empty}
+    direct = core._block(**{**defaults, **kw})  # one block, evaluate's defaults
     for k in OUTPUT_KEYS:
         np.testing.assert_array_equal(blocked[k], np.broadcast_to(direct[k], (n,)), err_msg=k)

@@ -166,16 +166,12 @@ def evaluate(*, interference_min, interference_max=None, d, L, di=0.0, Do,
     return {k: v.reshape(shape) for k, v in out.items()}
 
 
-def _block(*, interference_min, interference_max=None, d, L, di=0.0, Do,
-             Es, nus, alphas=11.5e-6, Rps, rhos=7.85e-9,
-             Eh, nuh, alphah=11.5e-6, Rph, rhoh=7.85e-9,
-             mu_slip, mu_press=None, rz_shaft=0.0, rz_hub=0.0, smoothing=0.8,
-             torque=0.0, axial_force=0.0, slip_safety=1.5, omega=0.0,
-             T_shaft=20.0, T_hub=20.0, T_assembly=20.0, joining_clearance=None,
-             yield_safety=1.2, brittle_shaft=False, brittle_hub=False, Rms=np.inf, Rmh=np.inf,
-             fracture_safety=2.0, shrink=False, max_heating=np.inf, T_shaft_cooled=None,
-             press_force_limit=np.inf) -> dict:
-    """One block of :func:`evaluate` (arguments and results as there)."""
+def _block(*, interference_min, interference_max, d, L, di, Do, Es, nus, alphas, Rps, rhos,
+           Eh, nuh, alphah, Rph, rhoh, mu_slip, mu_press, rz_shaft, rz_hub, smoothing,
+           torque, axial_force, slip_safety, omega, T_shaft, T_hub, T_assembly,
+           joining_clearance, yield_safety, brittle_shaft, brittle_hub, Rms, Rmh,
+           fracture_safety, shrink, max_heating, T_shaft_cooled, press_force_limit) -> dict:
+    """One block of :func:`evaluate`: every argument given (evaluate holds the defaults)."""
     f64 = np.float64
     dmin = np.asarray(interference_min, dtype=f64)
     dmax = dmin if interference_max is None else np.asarray(interference_max, dtype=f64)
