@@ -217,8 +217,8 @@ def clamp_to_prevent_opening(F_A, a, s_sym, u, A_D, I_BT, M_B=0.0):
     >>> round(float(clamp_to_prevent_opening(1000.0, 6.0, 0.0, 10.0, 200.0, 2400.0)), 1)
     5000.0
     """
-    F_A, a, s, u, A, I, M = (np.asarray(v, float) for v in (F_A, a, s_sym, u, A_D, I_BT, M_B))
-    return F_A * (a - s) * u / (I / A + s * u) + M * u * A / (I + s * u * A)
+    F_A, a, s, u, A, Ib, M = (np.asarray(v, float) for v in (F_A, a, s_sym, u, A_D, I_BT, M_B))
+    return F_A * (a - s) * u / (Ib / A + s * u) + M * u * A / (Ib + s * u * A)
 
 
 def opening_limit(F_V, phi_en, a, s_sym, u, A_D, I_BT):
@@ -246,8 +246,8 @@ def opening_limit(F_V, phi_en, a, s_sym, u, A_D, I_BT):
     >>> round(float(opening_limit(6000.0, 0.2, 6.0, 0.0, 10.0, 200.0, 2400.0)), 1)
     1034.5
     """
-    F_V, phi, a, s, u, A, I = (np.asarray(v, float) for v in (F_V, phi_en, a, s_sym, u, A_D, I_BT))
-    k = (1.0 - phi) + (a - s) * u / (I / A + s * u)
+    F_V, phi, a, s, u, A, Ib = (np.asarray(v, float) for v in (F_V, phi_en, a, s_sym, u, A_D, I_BT))
+    k = (1.0 - phi) + (a - s) * u / (Ib / A + s * u)
     with np.errstate(divide="ignore"):
         return np.where(k > 0, F_V / np.where(k > 0, k, 1.0), np.inf)
 
