@@ -165,7 +165,7 @@ def test_pdf_page_images_as_artefacts(demo_pdf):
         old.unlink()
     if shutil.which("pdftoppm"):
         subprocess.run(["pdftoppm", "-r", "70", "-png", str(demo_pdf), str(out / "page")],
-                       check=True, timeout=120)
+                       check=True, timeout=600)
     else:
         try:
             import pypdfium2 as pdfium
