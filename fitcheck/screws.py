@@ -121,9 +121,10 @@ METHOD_NOTES: list[tuple[str, str]] = [
      "y = 1 + w·βL·tan φ): a wide plate, or any D_A beyond DA,Gr, takes that value (this program's "
      "reading; the printed equations grow without bound in ln y); by default D_A is the screw spacing "
      "of the pattern, never below the head's bearing diameter dw (a pattern whose heads would overlap is "
-     "refused). Effect of the cap: with D_A beyond DA,Gr the cone is as wide as it gets, δP is the full "
-     "cone's; without the cap tan φ and the clamp stiffness would keep growing with D_A, Φ would fall "
-     "and FKR,min would rise (unsafe)",
+     "refused). Effect of the cap: beyond DA,Gr δP is the full cone's; without the cap tan φ and the "
+     "clamp stiffness would keep growing with D_A: Φ would fall (the cap is safe for screw force and "
+     "fatigue) while the embedding loss and the clamped parts' share of FA would grow (the cap gives a "
+     "few per cent more FKR,min: unsafe side, stated)",
      "VDI 2230-1:2015, 5.1.2.2–5.1.2.3"),
     ("Shigley's frustum (30°) and the exponential fit of the member stiffness are computed alongside "
      "for comparison only; a tapped joint as Shigley's cap screw: effective grip l' = h + d/2 (tapped part "

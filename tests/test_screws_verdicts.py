@@ -167,7 +167,7 @@ def test_shigley_tapped_joint_uses_the_cap_screw_frusta():
 
 def test_limiting_diameter_cap_effect():
     # the cap D_A ≤ DA,Gr: a plate wider than DA,Gr is as stiff as an infinite one; without it the
-    # printed tan φ would keep rising with D_A (stiffer parts, smaller Φ, larger FKR: unsafe)
+    # printed tan φ would keep rising with D_A (stiffer parts: smaller Φ, larger embedding loss)
     wide = run(count=1, bolt_circle=None, clamp_outer_diameter="500 mm")
     plate = run(count=1, bolt_circle=None)
     assert wide.load_factor == pytest.approx(plate.load_factor, rel=1e-9)
