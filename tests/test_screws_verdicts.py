@@ -163,6 +163,12 @@ def test_shigley_tapped_joint_uses_the_cap_screw_frusta():
     k3 = core.frustum_stiffness(70000.0, d, 0.75, dw + 2 * 1.5 * math.tan(math.radians(30)))
     k = 1 / (1 / k1 + 1 / k2 + 1 / k3)
     assert r.k_frustum_shigley == pytest.approx(float(k), rel=1e-9)
+    # the former comparison, one 30° cone from the head over the cover only, was 66 % stiffer
+    import numpy as np
+
+    one_cone = 1 / float(core.clamp_compliance(np.array([0.0]), np.array([3.0]), np.array([70000.0]), dw, d,
+                                               np.inf, math.tan(math.radians(30)), True, 3.0).sum())
+    assert one_cone / r.k_frustum_shigley == pytest.approx(1.66, abs=0.01)
 
 
 def test_limiting_diameter_cap_effect():
