@@ -50,7 +50,17 @@ _QTY = re.compile(r"([+\-−]?\d+(?:\.\d+)?)\s?(µm|mm|MPa|N·m|kN|N)(?![\w·])"
 _PLAIN = re.compile(r"\s*[+\-−]?\d+(?:\.\d+)?\s*")
 
 
+_RANGE = re.compile(r"([+\-−]?\d+(?:\.\d+)?)(\s*…\s*)(?=[+\-−]?\d+(?:\.\d+)?\s?(µm|mm|MPa|N·m|kN|N)(?![\w·]))")
+
+
 def _convert_quantities(text: str) -> str:
+    """Quantities in a label converted to inch units; ``a … b µm`` converts both ends.
+
+    >>> _convert_quantities("clearance -39 … -10 µm")
+    'clearance -0.001535 in … -0.0003937 in'
+    """
+    text = _RANGE.sub(lambda m: f"{m.group(1)} {m.group(3)}{m.group(2)}", text)
+
     def repl(m: re.Match) -> str:
         unit, f = _INCH[m.group(2)]
         x = float(m.group(1).replace("−", "-")) * f
