@@ -216,6 +216,7 @@ class DesignCase:
     screws: tuple = ()
     names: dict = field(default_factory=dict)
     format_version: int = FORMAT_VERSION
+    unit_system: str = "SI"
 
     def joints(self) -> Iterator[tuple[Engine, str, object]]:
         """Every joint as ``(engine, name, input)`` in file order by kind."""
@@ -270,13 +271,14 @@ def from_document(data: Mapping, source: str = "case file") -> DesignCase:
         raise InputError(source, type(data).__name__, "a TOML table")
     _check_version(data, source)
 
-    allowed_top = ("format_version", "title", "conditions", *ENGINES)
+    allowed_top = ("format_version", "unit_system", "title", "conditions", *ENGINES)
     for key in data:
         if key not in allowed_top:
             errs.add(InputError(key, _show(data[key]), "a top-level key or table: "
                                 + ", ".join(allowed_top), did_you_mean(key, allowed_top)))
 
     title = _read_title(data.get("title", {}), errs)
+    unit_system = _read_unit_system(data.get("unit_system", "SI"), errs)
 
     # the engines this file uses (imported lazily, only these)
     used: dict[str, Engine] = {}
@@ -353,8 +355,23 @@ def from_document(data: Mapping, source: str = "case file") -> DesignCase:
         names[table] = tuple(got_names)
 
     errs.raise_if_any()
-    return DesignCase(title=title, conditions=conditions, names=names,
+    return DesignCase(title=title, conditions=conditions, names=names, unit_system=unit_system,
                       **{k: tuple(v) for k, v in inputs.items()})
+
+
+#: Values of the top-level key ``unit_system``: the units of the report, plots and CLI text.
+UNIT_SYSTEMS = ("SI", "inch")
+
+
+def _read_unit_system(v, errs: ErrorCollector) -> str:
+    """``unit_system = "SI" | "inch"`` (case-insensitive; "si", "Inch" accepted and normalised)."""
+    if isinstance(v, str):
+        for u in UNIT_SYSTEMS:
+            if v.strip().lower() == u.lower():
+                return u
+    errs.add(InputError("unit_system", _show(v), "'SI' or 'inch'",
+                        did_you_mean(str(v), list(UNIT_SYSTEMS))))
+    return "SI"
 
 
 def _check_version(data: Mapping, source: str) -> None:
@@ -514,6 +531,8 @@ def _count(v) -> int:
 def to_document(case: DesignCase) -> dict:
     """The case as a plain TOML document (what :func:`dumps` writes)."""
     doc: dict = {"format_version": FORMAT_VERSION}
+    if getattr(case, "unit_system", "SI") != "SI":
+        doc["unit_system"] = case.unit_system
     title = case.title.to_mapping()
     if title:
         doc["title"] = title
