@@ -744,16 +744,20 @@ def evaluate(case: DesignCase) -> CaseResult:
 # --------------------------------------------------------------------------- demo
 
 DEMO_RESOURCE = "benchtop_pump.toml"
+INCH_DEMO_RESOURCE = "lab_winch.toml"
 
 
-def demo_text() -> str:
-    """The demo case file (gearhead of a benchtop pump) as TOML text."""
-    return importlib.resources.files("fitcheck.demo").joinpath(DEMO_RESOURCE).read_text("utf-8")
+def demo_text(inch: bool = False) -> str:
+    """The demo case file as TOML text: the gearhead of a benchtop pump (SI), or with
+    ``inch=True`` the gearhead of a small lab winch in inch units (ASME B4.1 fits, UNC screws)."""
+    name = INCH_DEMO_RESOURCE if inch else DEMO_RESOURCE
+    return importlib.resources.files("fitcheck.demo").joinpath(name).read_text("utf-8")
 
 
-def demo_case() -> DesignCase:
-    """The demo case: the gearhead of a benchtop pump (invented, realistic values)."""
-    return loads(demo_text(), source=f"fitcheck/demo/{DEMO_RESOURCE}")
+def demo_case(inch: bool = False) -> DesignCase:
+    """The demo case (invented, realistic values); ``inch=True`` for the lab-winch gearhead in inch."""
+    name = INCH_DEMO_RESOURCE if inch else DEMO_RESOURCE
+    return loads(demo_text(inch), source=f"fitcheck/demo/{name}")
 
 
 def replace(case: DesignCase, **changes) -> DesignCase:

@@ -110,8 +110,9 @@ def print_table(headers: list[str], rows: list[list], out=None) -> None:
     out = out or sys.stdout
     system = getattr(out, "system", None) or getattr(sys.stdout, "system", None)
     if system == "inch":
-        from ..display import table_in_system
+        from ..display import table_in_system, text_in_system
         headers, rows = table_in_system(headers, rows, system)
+        rows = [[text_in_system(str(c), system) for c in r] for r in rows]
     cells = [[str(h) for h in headers]] + [[str(c) for c in r] for r in rows]
     widths = [max(len(r[i]) for r in cells) for i in range(len(headers))]
     for j, r in enumerate(cells):
