@@ -347,8 +347,19 @@ def table_in_system(headers: list[str], rows: list[list], system: str) -> tuple[
         unit = m[2].strip()
         new_unit = None
         for r in rows:
+            cell = str(r[j])
+            pair = re.fullmatch(r"\s*([-+]?[\d.]+(?:e[-+]?\d+)?)\s*…\s*([-+]?[\d.]+(?:e[-+]?\d+)?)\s*", cell)
+            if pair:
+                a, b = (inch_value(float(x), unit, column=True) for x in pair.groups())
+                if a is None or b is None:
+                    break
+                plus = cell.strip().startswith("+")
+                pa = "+" if plus and float(pair[1]) >= 0 else ""
+                pb = "+" if plus and float(pair[2]) >= 0 else ""
+                r[j], new_unit = f"{pa}{a[0]} … {pb}{b[0]}", a[1]
+                continue
             try:
-                got = inch_value(float(str(r[j]).replace("+", "")), unit, column=True)
+                got = inch_value(float(cell.replace("+", "")), unit, column=True)
             except ValueError:
                 continue
             if got is None:

@@ -180,3 +180,19 @@ def test_case_unit_system_key():
     assert case.loads(case.dumps(c)).unit_system == "inch"
     with pytest.raises(Exception, match="unit_system"):
         case.loads(text.replace("format_version = 1", 'format_version = 1\nunit_system = "imperial"'))
+
+
+@pytest.mark.filterwarnings("ignore::fitcheck.errors.MethodRangeWarning")
+def test_fit_search_over_ansi_classes_agrees_with_evaluating_each_fit():
+    from fitcheck.search import search_fits
+    joint = _joint("1 in FN2", "inch")
+    r = search_fits(joint, systems=("ansi",))
+    assert r.evaluated == len(fits.ansi_classes(25.4))
+    assert all(c.basis.startswith("ANSI B4.1") for c in r.passing + r.rejected)
+    for c in r.passing[:3] + r.rejected[:3]:
+        own = pressfit.evaluate(_joint(c.fit, "inch"))
+        assert own.ok == (c in r.passing), c.fit
+    both = search_fits(joint, systems=("iso", "ansi"))
+    assert both.evaluated == search_fits(joint).evaluated + r.evaluated
+    with pytest.raises(InputError, match="systems"):
+        search_fits(joint, systems=("jis",))
