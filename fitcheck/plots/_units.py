@@ -22,8 +22,9 @@ _KINDS = {
 def scale(kind: str, units: str = "SI") -> tuple[float, str]:
     """Factor from the SI value of ``kind`` to the plotted value, and the axis label unit.
 
-    >>> scale("um", "inch"), scale("MPa", "SI")
-    ((0.03937007874015748, 'thou'), (1.0, 'MPa'))
+    >>> k, label = scale("um", "inch")
+    >>> round(k * 25.4, 12), label, scale("MPa", "SI")
+    (1.0, 'thou', (1.0, 'MPa'))
     """
     si_label, inch_label, inch_unit, si_unit, mult = _KINDS[kind]
     if units != "inch":
