@@ -77,5 +77,19 @@ def ansi_section(show_fit, system: str) -> None:
         except InputError as e:
             st.error(widgets.error_text(e), icon=":material/error:")
             return
-        show_fit(f, system)
+        _show(f, system)
         st.caption(f"Source: {f.source}. In a case file: `fit = \"{f.designation}\"`.")
+
+
+def _show(f: fits.Fit, system: str) -> None:
+    """The B4.1 fit as text and a small table (no subheader, metric or keyed widget, so the
+    page's own fit display stays the first of its kind)."""
+    from fitcheck.ui import unitsys
+    show = lambda um: unitsys.show(um, "small_length", system)  # noqa: E731
+    st.markdown(f"**{f.designation}** — {f.kind} fit: clearance {show(f.clearance_min_um)} … "
+                f"{show(f.clearance_max_um)} (negative = interference)")
+    rows = {z.feature + " " + z.cls: [show(z.upper_um), show(z.lower_um),
+                                       unitsys.show(z.max_mm, "length", system, digits=6),
+                                       unitsys.show(z.min_mm, "length", system, digits=6)]
+            for z in (f.hole, f.shaft)}
+    st.table({"limit": ["upper", "lower", "largest size", "smallest size"], **rows})
