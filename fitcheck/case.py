@@ -271,6 +271,7 @@ def from_document(data: Mapping, source: str = "case file") -> DesignCase:
     _check_version(data, source)
 
     allowed_top = ("format_version", "title", "conditions", *ENGINES)
+    _check_limits(data, allowed_top)
     for key in data:
         if key not in allowed_top:
             errs.add(InputError(key, _show(data[key]), "a top-level key or table: "
@@ -355,6 +356,33 @@ def from_document(data: Mapping, source: str = "case file") -> DesignCase:
     errs.raise_if_any()
     return DesignCase(title=title, conditions=conditions, names=names,
                       **{k: tuple(v) for k, v in inputs.items()})
+
+
+def check_limits(data: Mapping) -> None:
+    """Refuse a parsed case document whose counts, lengths or characters exceed what the schema
+    allows (:mod:`fitcheck.inputlimits`), before any value is read; the loader does this first."""
+    _check_limits(data, ("format_version", "title", "conditions", *ENGINES))
+
+
+def _check_limits(data: Mapping, allowed_top: tuple[str, ...]) -> None:
+    """Counts, lengths and characters as the schema allows, before any value is read."""
+    from .inputlimits import DEFAULT_KEYS, check_case
+
+    tables = {}
+    for table, eng in ENGINES.items():
+        if table in data:
+            try:
+                tables[table] = eng.keys()
+            except EngineUnavailable:  # reported by the loader; no schema to count against
+                tables[table] = ("name", *(f"_{i}" for i in range(DEFAULT_KEYS)))
+    known = set(CONDITION_KEYS)
+    for keys in tables.values():
+        known.update(keys)
+    errs = check_case(data, tables, allowed_top, TITLE_KEYS, known)
+    if len(errs) == 1:
+        raise errs[0]
+    if errs:
+        raise InputErrors(errs)
 
 
 def _check_version(data: Mapping, source: str) -> None:
@@ -458,10 +486,12 @@ def _scope_errors(fld: str, v) -> list[InputError]:
         return []
     if not isinstance(v, str) or not v.strip()[:1].lstrip("+-.").isdigit():
         return []
-    from .units import Q_
+    from .qparse import quantity_or_none
 
     try:
-        q = Q_(v.strip())
+        q = quantity_or_none(v)
+        if q is None:  # text outside the quantity grammar: the engine refuses it in its own words
+            return []
         spec = SCOPE_LIMITS.get(str(q.dimensionality))
         if spec is None:
             return []
@@ -536,10 +566,12 @@ def _same_value(a, b) -> bool:
         return True
     if not (isinstance(a, str) and isinstance(b, str)):
         return False
-    from .units import Q_
+    from .qparse import quantity_or_none
 
     try:
-        qa, qb = Q_(a), Q_(b)
+        qa, qb = quantity_or_none(a), quantity_or_none(b)
+        if qa is None or qb is None:
+            return False
         return qa.dimensionality == qb.dimensionality and math.isclose(
             float(qa.to(qb.units).magnitude), float(qb.magnitude), rel_tol=1e-12, abs_tol=1e-12)
     except Exception:  # pint raises several unrelated types for text it cannot read

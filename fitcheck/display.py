@@ -149,9 +149,10 @@ def convert_text(text: str, system: str) -> str:
     """
     if not isinstance(text, str) or not text.strip():
         return text
-    try:
-        q = ureg.Quantity(text.strip().replace("·", "*"))
-    except Exception:
+    from .qparse import quantity_or_none
+
+    q = quantity_or_none(text)  # never pint on text outside the quantity grammar
+    if q is None:
         return text
     if not hasattr(q, "units") or q.dimensionless:
         return text

@@ -30,6 +30,7 @@ from . import CAUTION, __version__
 from .case import CaseResult, DesignCase, JointResult, evaluate
 from .checks import Check
 from .errors import InputError
+from .safefile import atomic_write
 from .units import plain
 
 __all__ = ["Report", "build", "to_html", "to_pdf", "write", "FORMATS"]
@@ -594,15 +595,11 @@ def write(result: CaseResult | DesignCase, path: str | os.PathLike) -> Path:
     if not p.parent.is_dir():
         raise InputError("output", str(path), "a path in an existing folder")
     rep = result if isinstance(result, Report) else build(result)
-    tmp = p.with_name(f".{p.name}.{os.getpid()}.tmp")
-    try:
+    try:  # an exclusive temporary file with an unpredictable name, renamed into place
         if suffix == ".pdf":
-            to_pdf(rep, tmp)
+            atomic_write(p, lambda f: to_pdf(rep, f))
         else:
-            tmp.write_text(to_html(rep), encoding="utf-8")
-        os.replace(tmp, p)
+            atomic_write(p, lambda f: f.write(to_html(rep).encode("utf-8")))
     finally:
         rep.close()
-        if tmp.exists():
-            tmp.unlink()
     return p

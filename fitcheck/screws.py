@@ -405,7 +405,7 @@ def _bool(x, k):
 
 
 def _count(x, k):
-    if isinstance(x, bool) or not isinstance(x, int | float) or x != int(x) or not 1 <= x <= 1000:
+    if isinstance(x, bool) or not isinstance(x, int | float) or not 1 <= x <= 1000 or x != int(x):
         raise InputError(k, x, "a whole number from 1 to 1000")
     return int(x)
 
@@ -709,6 +709,9 @@ def evaluate(inp: ScrewJointInput) -> ScrewJointResult:
     -------
     ScrewJointResult
     """
+    for k in ("count", "slip_interfaces"):  # a hand-made input may hold nan, inf or a float
+        if getattr(inp, k, None) is not None:
+            _count(getattr(inp, k), k)
     with warnings.catch_warnings(record=True) as caught:
         warnings.simplefilter("always")
         res = _evaluate(inp)

@@ -665,7 +665,7 @@ def _seat_search_section(name: str, text: str) -> None:
                  f"housing {r.housing_given}")
     for seat, items, given in (("shaft", r.shafts, r.shaft_given),
                                ("housing", r.housings, r.housing_given)):
-        rows = [{"rank": c.rank if c.ok else "—", "class": c.cls,
+        rows = [{"rank": str(c.rank) if c.ok else "—", "class": c.cls,  # one type a column
                  "recommended": "★" if c.recommended else "",
                  "in the case": "●" if c.cls == given else "",
                  "operating clearance": _range(*c.operating_clearance_um, "um", state.system()),

@@ -103,9 +103,11 @@ def init() -> None:
     token = st.query_params.get(QP_CASE)
     if token:
         try:
-            ss[DOC] = read_toml_bytes(decode(token).encode("utf-8"), "address")
+            linked = read_toml_bytes(decode(token).encode("utf-8"), "address")
+            casefile.check_limits(linked)  # sizes, counts, control characters: refused whole
+            ss[DOC] = linked
             return
-        except InputError as exc:
+        except (InputError, InputErrors) as exc:
             ss[NOTICE] = f"The case in the address could not be read ({exc.message}); the demo is open."
     demo = demo_doc()
     # the demo is written in SI: an address asking for inch units gets it in inch, like the switch

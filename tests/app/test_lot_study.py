@@ -195,6 +195,7 @@ def test_bearing_seat_search_and_take(app_test):
     r = search_bearing_seat(joint_input(demo_doc(), "bearing", BR))
     shafts = next(d.value for d in at.dataframe if "class" in d.value.columns)
     assert list(shafts["class"]) == [c.cls for c in r.shafts]
+    assert shafts["rank"].map(type).nunique() == 1  # one type a column: Arrow converts it cleanly
     good = [c.cls for c in r.housings if c.ok and c.cls != r.housing_given]
     if not good:
         pytest.skip("no other passing housing class for the demo bearing")
