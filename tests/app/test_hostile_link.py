@@ -16,8 +16,6 @@ import pytest
 from fitcheck import tomlwrite
 from fitcheck.tomlread import read_toml_bytes
 
-pytestmark = pytest.mark.browser
-
 FIRST = 60_000  # ms
 
 
@@ -60,7 +58,7 @@ class Health(threading.Thread):
 
 def _open(page, url: str, wait_idle, text: str | None = None) -> float:
     t0 = time.monotonic()
-    page.goto(url)
+    page.goto(url, timeout=FIRST)
     if text is None:
         page.get_by_test_id("stMainBlockContainer").get_by_role("heading").first.wait_for(timeout=FIRST)
     else:
@@ -70,6 +68,7 @@ def _open(page, url: str, wait_idle, text: str | None = None) -> float:
     return elapsed
 
 
+@pytest.mark.browser
 def test_hostile_links_are_refused_at_once(page, server, wait_idle):
     health = Health(server)
     health.start()
@@ -92,3 +91,27 @@ def test_hostile_links_are_refused_at_once(page, server, wait_idle):
     assert unit <= normal + 1.0, (unit, normal)
     assert nested <= normal + 1.0, (nested, normal)
     assert health.count > 0 and not health.failures, health.failures
+
+
+def _texts(at) -> list[str]:
+    return [e.value for e in at.error] + [i.value for i in at.info]
+
+
+def test_a_link_with_an_expression_shows_the_refusal(app_test):
+    doc = _demo_doc()
+    doc["pressfit"][0]["length"] = "9**9**9 mm"
+    at = app_test("press_fit", query={"case": _encode(tomlwrite.dumps(doc))})
+    assert not at.exception
+    assert any("a power of a number" in t for t in _texts(at)), _texts(at)
+
+
+@pytest.mark.parametrize("text, needle", [
+    ("format_version = 1\nx = " + "[" * 2000 + "]" * 2000 + "\n", "nested at most"),
+    ('format_version = 1\n[title]\nproject = "A\\u202eB"\n', "bidi"),
+    ("format_version = 1\n[[pressfit]]\nname = 'a'\nlength = [" + "1," * 5000 + "1]\n",
+     "at most 16 items"),
+])
+def test_a_hostile_link_opens_the_demo_with_a_notice(app_test, text, needle):
+    at = app_test(query={"case": _encode(text)})
+    assert not at.exception
+    assert any("could not be read" in t and needle in t for t in _texts(at)), _texts(at)
