@@ -216,6 +216,7 @@ class DesignCase:
     screws: tuple = ()
     names: dict = field(default_factory=dict)
     format_version: int = FORMAT_VERSION
+    unit_system: str = "SI"
 
     def joints(self) -> Iterator[tuple[Engine, str, object]]:
         """Every joint as ``(engine, name, input)`` in file order by kind."""
@@ -270,7 +271,7 @@ def from_document(data: Mapping, source: str = "case file") -> DesignCase:
         raise InputError(source, type(data).__name__, "a TOML table")
     _check_version(data, source)
 
-    allowed_top = ("format_version", "title", "conditions", *ENGINES)
+    allowed_top = ("format_version", "unit_system", "title", "conditions", *ENGINES)
     _check_limits(data, allowed_top)
     for key in data:
         if key not in allowed_top:
@@ -278,6 +279,7 @@ def from_document(data: Mapping, source: str = "case file") -> DesignCase:
                                 + ", ".join(allowed_top), did_you_mean(key, allowed_top)))
 
     title = _read_title(data.get("title", {}), errs)
+    unit_system = _read_unit_system(data.get("unit_system", "SI"), errs)
 
     # the engines this file uses (imported lazily, only these)
     used: dict[str, Engine] = {}
@@ -354,14 +356,14 @@ def from_document(data: Mapping, source: str = "case file") -> DesignCase:
         names[table] = tuple(got_names)
 
     errs.raise_if_any()
-    return DesignCase(title=title, conditions=conditions, names=names,
+    return DesignCase(title=title, conditions=conditions, names=names, unit_system=unit_system,
                       **{k: tuple(v) for k, v in inputs.items()})
 
 
 def check_limits(data: Mapping) -> None:
     """Refuse a parsed case document whose counts, lengths or characters exceed what the schema
     allows (:mod:`fitcheck.inputlimits`), before any value is read; the loader does this first."""
-    _check_limits(data, ("format_version", "title", "conditions", *ENGINES))
+    _check_limits(data, ("format_version", "unit_system", "title", "conditions", *ENGINES))
 
 
 def _check_limits(data: Mapping, allowed_top: tuple[str, ...]) -> None:
@@ -383,6 +385,21 @@ def _check_limits(data: Mapping, allowed_top: tuple[str, ...]) -> None:
         raise errs[0]
     if errs:
         raise InputErrors(errs)
+
+
+#: Values of the top-level key ``unit_system``: the units of the report, plots and CLI text.
+UNIT_SYSTEMS = ("SI", "inch")
+
+
+def _read_unit_system(v, errs: ErrorCollector) -> str:
+    """``unit_system = "SI" | "inch"`` (case-insensitive; "si", "Inch" accepted and normalised)."""
+    if isinstance(v, str):
+        for u in UNIT_SYSTEMS:
+            if v.strip().lower() == u.lower():
+                return u
+    errs.add(InputError("unit_system", _show(v), "'SI' or 'inch'",
+                        did_you_mean(str(v), list(UNIT_SYSTEMS))))
+    return "SI"
 
 
 def _check_version(data: Mapping, source: str) -> None:
@@ -544,6 +561,8 @@ def _count(v) -> int:
 def to_document(case: DesignCase) -> dict:
     """The case as a plain TOML document (what :func:`dumps` writes)."""
     doc: dict = {"format_version": FORMAT_VERSION}
+    if getattr(case, "unit_system", "SI") != "SI":
+        doc["unit_system"] = case.unit_system
     title = case.title.to_mapping()
     if title:
         doc["title"] = title
@@ -757,16 +776,20 @@ def evaluate(case: DesignCase) -> CaseResult:
 # --------------------------------------------------------------------------- demo
 
 DEMO_RESOURCE = "benchtop_pump.toml"
+INCH_DEMO_RESOURCE = "lab_winch.toml"
 
 
-def demo_text() -> str:
-    """The demo case file (gearhead of a benchtop pump) as TOML text."""
-    return importlib.resources.files("fitcheck.demo").joinpath(DEMO_RESOURCE).read_text("utf-8")
+def demo_text(inch: bool = False) -> str:
+    """The demo case file as TOML text: the gearhead of a benchtop pump (SI), or with
+    ``inch=True`` the gearhead of a small lab winch in inch units (ASME B4.1 fits, UNC screws)."""
+    name = INCH_DEMO_RESOURCE if inch else DEMO_RESOURCE
+    return importlib.resources.files("fitcheck.demo").joinpath(name).read_text("utf-8")
 
 
-def demo_case() -> DesignCase:
-    """The demo case: the gearhead of a benchtop pump (invented, realistic values)."""
-    return loads(demo_text(), source=f"fitcheck/demo/{DEMO_RESOURCE}")
+def demo_case(inch: bool = False) -> DesignCase:
+    """The demo case (invented, realistic values); ``inch=True`` for the lab-winch gearhead in inch."""
+    name = INCH_DEMO_RESOURCE if inch else DEMO_RESOURCE
+    return loads(demo_text(inch), source=f"fitcheck/demo/{name}")
 
 
 def replace(case: DesignCase, **changes) -> DesignCase:

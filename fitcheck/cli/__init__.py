@@ -22,6 +22,7 @@ import pkgutil
 import sys
 
 from ..errors import FitcheckError, InputErrors
+from . import _units
 
 EXIT_OK, EXIT_FAILED_CHECK, EXIT_BAD_INPUT = 0, 1, 2
 
@@ -57,6 +58,7 @@ def build_parser() -> argparse.ArgumentParser:
         p = sub.add_parser(mod.COMMAND, help=mod.HELP, description=mod.HELP)
         p._cmd = mod.COMMAND
         mod.add_arguments(p)
+        _units.add(p)
         p.set_defaults(_run=mod.run)
     return parser
 
@@ -68,6 +70,10 @@ def main(argv: list[str] | None = None) -> int:
         parser.print_help()
         return EXIT_BAD_INPUT
     try:
+        sysname = _units.system(args) if getattr(args, "units", None) else _units.case_system(args)
+        if sysname == "inch" and not getattr(args, "json", False):
+            with _units.redirect(sysname):
+                return int(args._run(args))
         return int(args._run(args))
     except InputErrors as exc:  # one problem on one line; several as a list
         msg = exc.errors[0].message if len(exc.errors) == 1 else exc.message
@@ -113,6 +119,11 @@ def print_json(obj) -> None:
 def print_table(headers: list[str], rows: list[list], out=None) -> None:
     """Print a plain text table with aligned columns."""
     out = out or sys.stdout
+    system = getattr(out, "system", None) or getattr(sys.stdout, "system", None)
+    if system == "inch":
+        from ..display import table_in_system, text_in_system
+        headers, rows = table_in_system(headers, rows, system)
+        rows = [[text_in_system(str(c), system) for c in r] for r in rows]
     cells = [[str(h) for h in headers]] + [[str(c) for c in r] for r in rows]
     widths = [max(len(r[i]) for r in cells) for i in range(len(headers))]
     for j, r in enumerate(cells):

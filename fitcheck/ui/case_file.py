@@ -17,7 +17,7 @@ from fitcheck import case as casefile
 from fitcheck import report
 from fitcheck.errors import InputError, InputErrors
 from fitcheck.tomlread import read_toml_bytes
-from fitcheck.ui import app, state, widgets
+from fitcheck.ui import app, inch, state, widgets
 
 TITLE_KEYS = casefile.TITLE_KEYS
 PENDING = "cf.pending"      # a parsed upload with problems, waiting for "open anyway"
@@ -126,6 +126,7 @@ def render() -> None:
         st.button("Restore the demo case", key="cf.demo", on_click=_restore_demo,
                   help="Replaces the open case with the demo (gearhead of a benchtop pump). "
                   "Download your case first to keep it.")
+        inch.demo_button()  # the inch demo (fitcheck/ui/inch.py)
         st.subheader("Save the case")
         st.download_button("Download the case file (.toml)", case_text(),
                            file_name=f"{file_stem()}.toml", mime="application/toml",

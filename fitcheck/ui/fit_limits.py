@@ -13,7 +13,7 @@ import streamlit as st
 
 from fitcheck import fits
 from fitcheck.errors import InputError
-from fitcheck.ui import app, state, unitsys, widgets
+from fitcheck.ui import app, inch, state, unitsys, widgets
 from fitcheck.units import to_core
 
 DEFAULT = {"size": "25 mm", "hole": "H7", "shaft": "p6"}
@@ -167,6 +167,7 @@ def render() -> None:
                 st.error(widgets.error_text(e), icon=":material/error:")
             else:
                 _show_fit(f, system)
+    inch.ansi_section(_show_fit, system)  # ASME B4.1 classes (fitcheck/ui/inch.py)
     with st.expander("Preferred fits", expanded=False):
         st.dataframe(pd.DataFrame([{"basis": p.basis, "fit": p.fit, "use": p.description,
                                     "source": p.source} for p in prefs]),
