@@ -140,7 +140,7 @@ def test_toml_writer_layout_of_tables_and_arrays_of_tables():
     doc = {"a": 1, "t": {"x": "1 mm", "m": {"base": "C45E"}},
            "j": [{"name": "p", "sub": {"k": [1, 2]}}, {"name": "q"}]}
     text = tomlwrite.dumps(doc)
-    assert "[t]" in text and "[[j]]" in text and 'm = { base = "C45E" }' in text
+    assert "[t]" in text and "[[j]]" in text and 'm = {base = "C45E"}' in text
     assert tomllib.loads(text) == doc
 
 

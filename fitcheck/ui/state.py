@@ -110,6 +110,7 @@ def init() -> None:
         except (InputError, InputErrors) as exc:
             ss[NOTICE] = f"The case in the address could not be read ({exc.message}); the demo is open."
     demo = demo_doc()
+    ss.setdefault("cf.source_text", casefile.demo_text())  # saving keeps the demo file's comments
     # the demo is written in SI: an address asking for inch units gets it in inch, like the switch
     ss[DOC] = demo if ss[UNITS] == "SI" else _convert(demo, ss[UNITS], ss.setdefault(MEMO, {}))
 
