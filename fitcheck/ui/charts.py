@@ -185,6 +185,8 @@ def unit_factor(unit: str, system: str) -> tuple[float, str]:
 
     target = unitsys._target_unit(unit, system)  # the unit the tables of the system use
     f = 1.0 if target == unit else float(Q_(1.0, unit).to(target).magnitude)
+    if system == "inch" and target == "in" and unit in ("um", "micrometer", "µm"):
+        return f * 1000.0, THOU  # small lengths read in thousandths of an inch
     return f, unitsys.symbol(target)
 
 

@@ -235,8 +235,8 @@ def _move_widgets(prefix: str, old: str, new: str, keep: bool = False) -> None:
     ss = st.session_state
     for k in _own_keys(prefix, old):
         nk = f"{prefix}.{new}." + k[len(f"{prefix}.{old}."):]
-        if nk.endswith(("_chart", ".button", ".use_suggested")):
-            continue  # charts and buttons are made anew
+        if nk.endswith(("_chart", ".button", ".use_suggested", ".editor")):
+            continue  # charts, buttons and table editors are made anew (from the document)
         try:
             ss[nk] = ss[k]
         except Exception:  # noqa: BLE001 - a widget value Streamlit will not let us set

@@ -243,7 +243,7 @@ def test_case_verdict_keeps_other_joints_when_one_is_bad(app_test):
     m = metrics(at)
     assert m["Joints with input problems"] == "1"
     assert m["Joints"] == "4"
-    assert any(f"pressfit[{PF}].length" in t for t in errors(at))
+    assert any(esc(f"pressfit[{PF}].length") in t for t in errors(at))
 
 
 # --------------------------------------------------------------------------- state and units
@@ -306,7 +306,7 @@ def test_case_upload_replaces_the_case(app_test):
     at.file_uploader[0].upload("mine.toml", tomlwrite.dumps(doc).encode(), "application/toml")
     at.run()
     assert not at.exception
-    assert any("Opened mine.toml" in s.value for s in at.success)
+    assert any(esc("Opened mine.toml") in s.value for s in at.success)
     assert at.text_input(key="title.project").value == "Bench pump test"
     at.switch_page("fitcheck/ui/press_fit.py").run()
     assert at.text_input(key=f"pf.{PF}.torque").value == "2 N*m"
@@ -323,7 +323,7 @@ def test_bad_upload_is_refused_with_its_problems(app_test):
     assert at.text_input(key="title.project").value == demo_doc()["title"]["project"]
     at.file_uploader[0].set_value(("junk.toml", b"\x00\x01binary", "application/toml")).run()
     assert not at.exception
-    assert any("junk.toml" in t for t in errors(at))
+    assert any(esc("junk.toml") in t for t in errors(at))
 
 
 def test_download_and_report(app_test):
