@@ -77,6 +77,10 @@ _RULES: tuple[tuple[str, tuple[str, ...], str, str, str | None], ...] = (
      "its limiting surface pressure", "a hardened washer or a larger bearing face", None),
     ("screws", ("engagement",), "the tapped thread is shorter than the housing material needs",
      "a deeper thread, a thread insert, or a through bolt with a nut", None),
+    ("screws", ("opening",), "the eccentric working load lifts the joint at its loaded edge",
+     "more preload, screws nearer the load line, or a stiffer (wider) interface", None),
+    ("screws", ("gasket",), "the clamp load left on the gasket is below its sealing pressure",
+     "more preload or more screws, or a gasket with a lower seating pressure", None),
     ("screws", ("fatigue",), "the alternating stress in the thread exceeds its endurance limit",
      "more preload, a longer (more elastic) screw, or a thread rolled after heat treatment", None),
 )

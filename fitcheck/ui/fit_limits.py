@@ -47,6 +47,9 @@ def designation(v: dict) -> str:
 _SIZE_FIRST = re.compile(r"^\s*([-+]?(?:\d+\.?\d*|\.\d+)(?:[eE][-+]?\d+)?\s*[A-Za-z\"]*)\s+\S")
 
 
+_BARE = re.compile(r"^[-+]?(?:\d+\.?\d*|\.\d+)(?:[eE][-+]?\d+)?$")
+
+
 def _from_designation(text: str) -> dict:
     """Size and classes from a typed designation (``fits.parse`` decides what is valid).
 
@@ -58,7 +61,10 @@ def _from_designation(text: str) -> dict:
     except InputError:
         m = _SIZE_FIRST.match(text or "")
         if m:
-            to_core(m.group(1), "length", "nominal size", lo=0.0, lo_open=True)
+            size = m.group(1).strip()
+            if _BARE.match(size):  # a bare number is a size in mm (ISO 286)
+                size += " mm"
+            to_core(size, "length", "nominal size", lo=0.0, lo_open=True)
         raise
     size = (unitsys.show(d.nominal_mm, "length", "inch", digits=6) if d.inch
             else f"{d.nominal_mm:g} mm")

@@ -234,7 +234,7 @@ def checks_table(checks: Iterable, system: str, joint_of=None) -> pd.DataFrame:
             "reference": chk.reference,
         })
         if chk.note:
-            row["note"] = chk.note
+            row["note"] = unitsys.words(chk.note)
         rows.append(row)
     return pd.DataFrame(rows)
 
