@@ -154,6 +154,7 @@ def _summary(r: screws.ScrewJointResult, system: str, name: str) -> None:
                            name=name)
     st.subheader(f"{widgets.esc(r.name or 'Joint')}: {widgets.esc(r.thread)} – "
                  f"{widgets.esc(r.property_class)}")
+    st.markdown(f"**{widgets.esc(unitsys.words(r.tightening_instruction))}**")
     f = lambda x: unitsys.show(x, "force", system)  # noqa: E731
     c = st.columns(3)
     c[0].metric("Permissible preload F_M,zul", f(r.F_M_zul),
