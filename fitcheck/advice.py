@@ -71,6 +71,9 @@ _RULES: tuple[tuple[str, tuple[str, ...], str, str, str | None], ...] = (
     ("screws", ("separation",), "the clamp load left in service is below the required clamp "
      "load: the joint opens", "more or larger screws, or more preload (property class, "
      "tightening method)", None),
+    ("screws", ("shear",), "if the joint slips, the screws are loaded in shear beyond their "
+     "strength", "more or larger screws, more preload, or a dowel pin or fitted bolt to carry the "
+     "shear", None),
     ("screws", ("slip",), "friction in the interface does not carry the transverse load",
      "more screws, more preload, or a dowel pin to carry the shear", None),
     ("screws", ("surface", "pressure"), "the head or nut presses into the clamped part beyond "
