@@ -176,6 +176,11 @@ def switch_units() -> None:
     forget_widgets(DOC_PREFIXES)
 
 
+def convert(obj):
+    """A part of a document written in SI, rewritten in the session's unit system (as the switch)."""
+    return _convert(obj, system(), st.session_state.setdefault(MEMO, {}))
+
+
 def _convert(obj, system_name: str, memo: dict, key: str = ""):
     if isinstance(obj, dict):
         return {k: (v if k in ("name", "title", "format_version")
