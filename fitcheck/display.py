@@ -61,15 +61,17 @@ _SMALL = {"um", "micrometer", "micrometre", "micron", "µm", "uin", "microinch"}
 def num(x: float, digits: int = 4) -> str:
     """A number with ``digits`` significant digits, in plain notation where that stays readable.
 
-    >>> num(15742.3), num(0.000315, 3), num(-8.268), num(2.0), num(1.5e9)
-    ('15740', '0.000315', '-8.268', '2', '1.5e+09')
+    Never in e-notation and never "-0" (a value that rounds to zero reads "0").
+
+    >>> num(15742.3), num(0.000315, 3), num(-8.268), num(2.0), num(1.5e9), num(-1e-9), num(2e-7)
+    ('15740', '0.000315', '-8.268', '2', '1500000000', '-0.000000001', '0.0000002')
     """
     x = float(x)
-    if x == 0 or not math.isfinite(x):
+    if x == 0:
+        return "0"
+    if not math.isfinite(x):
         return f"{x:g}"
     e = math.floor(math.log10(abs(x)))
-    if e >= 7 or e < -5:
-        return f"{x:.{digits}g}"
     r = round(x, digits - 1 - e)
     dec = max(digits - 1 - e, 0)
     text = f"{r:.{dec}f}"
@@ -149,9 +151,10 @@ def convert_text(text: str, system: str) -> str:
     """
     if not isinstance(text, str) or not text.strip():
         return text
-    try:
-        q = ureg.Quantity(text.strip().replace("·", "*"))
-    except Exception:
+    from .qparse import quantity_or_none
+
+    q = quantity_or_none(text)  # never pint on text outside the quantity grammar
+    if q is None:
         return text
     if not hasattr(q, "units") or q.dimensionless:
         return text
@@ -378,3 +381,24 @@ def table_in_system(headers: list[str], rows: list[list], system: str) -> tuple[
             if got is not None:
                 r[iv], r[iu] = got
     return headers, rows
+
+
+_UNIT_WORDS = (("delta_degC", "K"), ("delta_degF", "°F"), ("degC", "°C"), ("degF", "°F"),
+          ("N*mm", "N·mm"), ("N*m", "N·m"), ("lbf*in", "lbf·in"), ("kg/m**3", "kg/m³"),
+          ("mm**2", "mm²"), ("in**2", "in²"), ("micrometer", "µm"), ("um", "µm"))
+
+
+def words(text: str) -> str:
+    """Unit spellings of input text as people write them: ``'default 2.5 um'`` -> ``'default 2.5 µm'``.
+
+    Only whole unit words after a number or a space are rewritten (``'sum'`` stays ``'sum'``).
+
+    >>> words("default 20 degC, 2.5 um, 3 N*m")
+    'default 20 °C, 2.5 µm, 3 N·m'
+    """
+    import re
+
+    out = str(text)
+    for a, b in _UNIT_WORDS:
+        out = re.sub(r"(?<=[\d\s(])" + re.escape(a) + r"(?![A-Za-z*])", b, out)
+    return out

@@ -28,8 +28,10 @@ the checks they fail.
 
 from __future__ import annotations
 
+import itertools
 import math
 import re
+from collections.abc import Iterable, Mapping
 from dataclasses import dataclass, field, fields
 
 import numpy as np
@@ -58,6 +60,40 @@ CHECK_NAMES = ("slip at loosest fit", "hub yield at tightest fit", "shaft yield 
 def _grade(cls: str) -> int:
     m = _CLASS_RE.match(cls)
     return int(m.group(2)) if m else -99
+
+
+#: Most items of one admitted list (letters, classes or grades) of a search.
+MAX_ADMITTED = 100
+_ADMITTED = {
+    "class": ("tolerance classes such as ('H7', 'H8') or ('h6',)", r"^\s*[A-Za-z]{1,2}\d{1,2}\s*$"),
+    "letter": ("deviation letters such as ('k', 'm', 'js')", r"^\s*[A-Za-z]{1,2}\s*$"),
+    "grade": ("tolerance grades, whole numbers from 1 to 18, such as (5, 6)", None),
+}
+
+
+def _admitted(name: str, seq, kind: str) -> tuple:
+    """An admitted list of a search as a tuple without repeats; :class:`InputError` for anything else.
+
+    A text, a number or ``None`` is not a list (a text would be read letter by letter), and a
+    list of more than :data:`MAX_ADMITTED` items is refused before any is evaluated.
+
+    >>> _admitted("shaft_grades", [6, 5, 6], "grade")
+    (6, 5)
+    """
+    what, pattern = _ADMITTED[kind]
+    if isinstance(seq, str | bytes | Mapping) or not isinstance(seq, Iterable):
+        raise InputError(name, seq, f"a list of {what}")
+    items = list(itertools.islice(iter(seq), MAX_ADMITTED + 1))
+    if len(items) > MAX_ADMITTED:
+        raise InputError(name, f"more than {MAX_ADMITTED} items", f"at most {MAX_ADMITTED} {what}")
+    for x in items:
+        if kind == "grade":
+            ok = isinstance(x, int | np.integer) and not isinstance(x, bool) and 1 <= x <= 18
+        else:
+            ok = isinstance(x, str) and re.match(pattern, x) is not None
+        if not ok:
+            raise InputError(name, x, what)
+    return tuple(dict.fromkeys(int(x) if kind == "grade" else x for x in items))
 
 
 def candidates(nominal_mm: float, holes=DEFAULT_HOLES, shaft_grades=DEFAULT_SHAFT_GRADES,
@@ -263,6 +299,9 @@ def search_fits(joint, *, holes=DEFAULT_HOLES, shaft_grades=DEFAULT_SHAFT_GRADES
     a.pop("_fit")
     a.pop("interference_min")
     a.pop("interference_max")
+    holes, shafts = _admitted("holes", holes, "class"), _admitted("shafts", shafts, "class")
+    shaft_grades = _admitted("shaft_grades", shaft_grades, "grade")
+    hole_grades = _admitted("hole_grades", hole_grades, "grade")
     for name, seq in (("holes", holes), ("shafts", shafts)):
         for c in seq:
             if not isinstance(c, str) or not _CLASS_RE.match(c.strip()):
@@ -493,6 +532,10 @@ def search_bearing_seat(joint, *, shaft_letters=BEARING_SHAFT_LETTERS,
 
     if not isinstance(joint, bearings.BearingSeatInput):
         raise InputError("joint", type(joint).__name__, "a BearingSeatInput (fitcheck.bearings)")
+    shaft_letters = _admitted("shaft_letters", shaft_letters, "letter")
+    housing_letters = _admitted("housing_letters", housing_letters, "letter")
+    shaft_grades = _admitted("shaft_grades", shaft_grades, "grade")
+    housing_grades = _admitted("housing_grades", housing_grades, "grade")
     b = bearings.bearing(joint.designation)
     with warnings.catch_warnings():
         warnings.simplefilter("ignore")

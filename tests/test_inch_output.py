@@ -11,8 +11,13 @@ import pytest
 from fitcheck import case as casefile
 from fitcheck import fits
 from fitcheck.display import inch_value, table_in_system, text_in_system, thou
-from fitcheck.plots import (plot_capacity_band, plot_clearance_budget, plot_fit, plot_joint_diagram,
-                            plot_wall_stresses)
+from fitcheck.plots import (
+    plot_capacity_band,
+    plot_clearance_budget,
+    plot_fit,
+    plot_joint_diagram,
+    plot_wall_stresses,
+)
 
 
 @pytest.fixture(scope="module")

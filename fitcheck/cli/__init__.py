@@ -75,16 +75,27 @@ def main(argv: list[str] | None = None) -> int:
             with _units.redirect(sysname):
                 return int(args._run(args))
         return int(args._run(args))
-    except InputErrors as exc:
-        sys.stderr.write(f"fitcheck: {exc.message}\n")
+    except InputErrors as exc:  # one problem on one line; several as a list
+        msg = exc.errors[0].message if len(exc.errors) == 1 else exc.message
+        sys.stderr.write(f"fitcheck: {msg}\n")
         return EXIT_BAD_INPUT
     except FitcheckError as exc:
-        sys.stderr.write(f"fitcheck: {exc}\n")
+        sys.stderr.write(f"fitcheck: {_one_line(str(exc))}\n")
+        return EXIT_BAD_INPUT
+    except BrokenPipeError:
+        return EXIT_OK
+    except OSError as exc:  # a file that cannot be read or written: a folder, /proc, no permission
+        where = f"{exc.filename}: " if getattr(exc, "filename", None) else ""
+        sys.stderr.write(f"fitcheck: {where}{exc.strerror or type(exc).__name__} "
+                         "(a readable input file and a writable output path are needed)\n")
         return EXIT_BAD_INPUT
     except KeyboardInterrupt:
         return 130
-    except BrokenPipeError:
-        return EXIT_OK
+
+
+def _one_line(text: str) -> str:
+    """An error message on one line (an engine's message may hold a newline)."""
+    return " ".join(text.split("\n"))
 
 
 def clean_json(obj):

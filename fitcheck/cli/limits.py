@@ -5,9 +5,9 @@ from __future__ import annotations
 import sys
 
 from .. import CAUTION
+from ..display import inch_size, thou
 from ..errors import InputError
 from ..fits import fit, preferred_fits
-from ..display import inch_size, thou
 from . import EXIT_OK, print_json, print_table
 from ._units import system as units_system
 

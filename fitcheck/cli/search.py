@@ -56,7 +56,7 @@ def _grades(text: str, option: str) -> tuple[int, ...]:
         t = t.strip().upper().removeprefix("IT")
         if not t:
             continue
-        if not t.isdigit():
+        if not (t.isascii() and t.isdigit()) or len(t) > 2:
             raise InputError(option, text, "grades separated by commas, e.g. '5,6,7'")
         out.append(int(t))
     return tuple(out)
