@@ -217,6 +217,7 @@ class DesignCase:
     screws: tuple = ()
     names: dict = field(default_factory=dict)
     format_version: int = FORMAT_VERSION
+    unit_system: str = "SI"
     #: The TOML text the case was read from (None for a case built in code). Saving writes the
     #: changes into this text, so the user's comments, key order and formatting stay.
     source_text: str | None = field(default=None, compare=False, repr=False)
@@ -253,7 +254,7 @@ def load(path: str | os.PathLike) -> DesignCase:
     """Read and validate a case file (at most 1 MiB); every problem is reported at once."""
     data = read_toml(path)
     case = from_document(data, source=str(path))
-    return dataclasses.replace(case, source_text=Path(path).read_text(encoding="utf-8"))
+    return dataclasses.replace(case, source_text=Path(path).read_text(encoding="utf-8-sig"))
 
 
 def loads(text: str | bytes, source: str = "case file") -> DesignCase:
@@ -266,7 +267,7 @@ def loads(text: str | bytes, source: str = "case file") -> DesignCase:
     except UnicodeEncodeError:  # pragma: no cover - lone surrogates in a str
         raise InputError(source, "text with invalid characters", "UTF-8 TOML text") from None
     case = from_document(data, source=source)
-    return dataclasses.replace(case, source_text=raw.decode("utf-8"))
+    return dataclasses.replace(case, source_text=raw.decode("utf-8-sig"))
 
 
 def from_document(data: Mapping, source: str = "case file") -> DesignCase:
@@ -276,13 +277,15 @@ def from_document(data: Mapping, source: str = "case file") -> DesignCase:
         raise InputError(source, type(data).__name__, "a TOML table")
     _check_version(data, source)
 
-    allowed_top = ("format_version", "title", "conditions", *ENGINES)
+    allowed_top = ("format_version", "unit_system", "title", "conditions", *ENGINES)
+    _check_limits(data, allowed_top)
     for key in data:
         if key not in allowed_top:
             errs.add(InputError(key, _show(data[key]), "a top-level key or table: "
                                 + ", ".join(allowed_top), did_you_mean(key, allowed_top)))
 
     title = _read_title(data.get("title", {}), errs)
+    unit_system = _read_unit_system(data.get("unit_system", "SI"), errs)
 
     # the engines this file uses (imported lazily, only these)
     used: dict[str, Engine] = {}
@@ -359,8 +362,50 @@ def from_document(data: Mapping, source: str = "case file") -> DesignCase:
         names[table] = tuple(got_names)
 
     errs.raise_if_any()
-    return DesignCase(title=title, conditions=conditions, names=names,
+    return DesignCase(title=title, conditions=conditions, names=names, unit_system=unit_system,
                       **{k: tuple(v) for k, v in inputs.items()})
+
+
+def check_limits(data: Mapping) -> None:
+    """Refuse a parsed case document whose counts, lengths or characters exceed what the schema
+    allows (:mod:`fitcheck.inputlimits`), before any value is read; the loader does this first."""
+    _check_limits(data, ("format_version", "unit_system", "title", "conditions", *ENGINES))
+
+
+def _check_limits(data: Mapping, allowed_top: tuple[str, ...]) -> None:
+    """Counts, lengths and characters as the schema allows, before any value is read."""
+    from .inputlimits import DEFAULT_KEYS, check_case
+
+    tables = {}
+    for table, eng in ENGINES.items():
+        if table in data:
+            try:
+                tables[table] = eng.keys()
+            except EngineUnavailable:  # reported by the loader; no schema to count against
+                tables[table] = ("name", *(f"_{i}" for i in range(DEFAULT_KEYS)))
+    known = set(CONDITION_KEYS)
+    for keys in tables.values():
+        known.update(keys)
+    errs = check_case(data, tables, allowed_top, TITLE_KEYS, known)
+    if len(errs) == 1:
+        raise errs[0]
+    if errs:
+        raise InputErrors(errs)
+
+
+#: Values of the top-level key ``unit_system``: the units of the report, plots and CLI text.
+UNIT_SYSTEMS = ("SI", "inch")
+
+
+def _read_unit_system(v, errs: ErrorCollector) -> str:
+    """``unit_system = "SI" | "inch"`` (case-insensitive; "si", "Inch" accepted and normalised)."""
+    if isinstance(v, str):
+        for u in UNIT_SYSTEMS:
+            if v.strip().lower() == u.lower():
+                return u
+    errs.add(InputError("unit_system", _show(v), "'SI' or 'inch'",
+                        did_you_mean(str(v), list(UNIT_SYSTEMS))))
+    return "SI"
 
 
 def _check_version(data: Mapping, source: str) -> None:
@@ -464,10 +509,12 @@ def _scope_errors(fld: str, v) -> list[InputError]:
         return []
     if not isinstance(v, str) or not v.strip()[:1].lstrip("+-.").isdigit():
         return []
-    from .units import Q_
+    from .qparse import quantity_or_none
 
     try:
-        q = Q_(v.strip())
+        q = quantity_or_none(v)
+        if q is None:  # text outside the quantity grammar: the engine refuses it in its own words
+            return []
         spec = SCOPE_LIMITS.get(str(q.dimensionality))
         if spec is None:
             return []
@@ -520,6 +567,8 @@ def _count(v) -> int:
 def to_document(case: DesignCase) -> dict:
     """The case as a plain TOML document (what :func:`dumps` writes)."""
     doc: dict = {"format_version": FORMAT_VERSION}
+    if getattr(case, "unit_system", "SI") != "SI":
+        doc["unit_system"] = case.unit_system
     title = case.title.to_mapping()
     if title:
         doc["title"] = title
@@ -542,10 +591,12 @@ def _same_value(a, b) -> bool:
         return True
     if not (isinstance(a, str) and isinstance(b, str)):
         return False
-    from .units import Q_
+    from .qparse import quantity_or_none
 
     try:
-        qa, qb = Q_(a), Q_(b)
+        qa, qb = quantity_or_none(a), quantity_or_none(b)
+        if qa is None or qb is None:
+            return False
         return qa.dimensionality == qb.dimensionality and math.isclose(
             float(qa.to(qb.units).magnitude), float(qb.magnitude), rel_tol=1e-12, abs_tol=1e-12)
     except Exception:  # pint raises several unrelated types for text it cannot read
@@ -865,16 +916,20 @@ def evaluate(case: DesignCase) -> CaseResult:
 # --------------------------------------------------------------------------- demo
 
 DEMO_RESOURCE = "benchtop_pump.toml"
+INCH_DEMO_RESOURCE = "lab_winch.toml"
 
 
-def demo_text() -> str:
-    """The demo case file (gearhead of a benchtop pump) as TOML text."""
-    return importlib.resources.files("fitcheck.demo").joinpath(DEMO_RESOURCE).read_text("utf-8")
+def demo_text(inch: bool = False) -> str:
+    """The demo case file as TOML text: the gearhead of a benchtop pump (SI), or with
+    ``inch=True`` the gearhead of a small lab winch in inch units (ASME B4.1 fits, UNC screws)."""
+    name = INCH_DEMO_RESOURCE if inch else DEMO_RESOURCE
+    return importlib.resources.files("fitcheck.demo").joinpath(name).read_text("utf-8")
 
 
-def demo_case() -> DesignCase:
-    """The demo case: the gearhead of a benchtop pump (invented, realistic values)."""
-    return loads(demo_text(), source=f"fitcheck/demo/{DEMO_RESOURCE}")
+def demo_case(inch: bool = False) -> DesignCase:
+    """The demo case (invented, realistic values); ``inch=True`` for the lab-winch gearhead in inch."""
+    name = INCH_DEMO_RESOURCE if inch else DEMO_RESOURCE
+    return loads(demo_text(inch), source=f"fitcheck/demo/{name}")
 
 
 def replace(case: DesignCase, **changes) -> DesignCase:

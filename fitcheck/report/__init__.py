@@ -25,8 +25,17 @@ from pathlib import Path
 
 from ..display import margin_text
 from ..errors import InputError
-from .model import (DEFERENCE, SIGNATURE_ROLES, CheckRow, DrawingBlock, InputRow, Report,
-                    Section, build, method_steps)
+from .model import (
+    DEFERENCE,
+    SIGNATURE_ROLES,
+    CheckRow,
+    DrawingBlock,
+    InputRow,
+    Report,
+    Section,
+    build,
+    method_steps,
+)
 from .words import unit_words
 
 __all__ = ["DEFERENCE", "FORMATS", "SIGNATURE_ROLES", "CheckRow", "DrawingBlock", "InputRow",
@@ -59,8 +68,8 @@ def to_pdf(result, path: str | os.PathLike | io.BufferedIOBase) -> None:
 def write(result, path: str | os.PathLike) -> Path:
     """Write the report to ``path``; the format follows the suffix (.html / .htm / .pdf).
 
-    The file is written next to its final place and renamed into it, so a failed
-    run never leaves half a report.
+    The file is written to an exclusive temporary file next to its final place and renamed
+    into it, so a failed run never leaves half a report.
     """
     p = Path(path)
     suffix = p.suffix.lower()
@@ -68,17 +77,14 @@ def write(result, path: str | os.PathLike) -> Path:
         raise InputError("output", str(path), "a file name ending in .html, .htm or .pdf")
     if not p.parent.is_dir():
         raise InputError("output", str(path), "a path in an existing folder")
+    from ..safefile import atomic_write
+
     rep = _report(result)
-    tmp = p.with_name(f".{p.name}.{os.getpid()}.tmp")
-    try:
-        if suffix == ".pdf":
-            to_pdf(rep, tmp)
-        else:
-            tmp.write_text(to_html(rep), encoding="utf-8")
-        os.replace(tmp, p)
-    finally:
-        if tmp.exists():
-            tmp.unlink()
+    # an exclusive temporary file with an unpredictable name, renamed into place
+    if suffix == ".pdf":
+        atomic_write(p, lambda f: to_pdf(rep, f))
+    else:
+        atomic_write(p, lambda f: f.write(to_html(rep).encode("utf-8")))
     return p
 
 

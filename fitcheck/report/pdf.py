@@ -277,11 +277,10 @@ def _numbered_canvas(footer_title: str, caution: str):
 
 def write_pdf(rep, path: str | os.PathLike | io.BufferedIOBase) -> None:
     """Lay the report out on A4 pages and write it to ``path`` (a file name or a binary stream)."""
+    from reportlab import rl_config
     from reportlab.lib.pagesizes import A4
     from reportlab.lib.units import mm
     from reportlab.platypus import SimpleDocTemplate
-
-    from reportlab import rl_config
 
     rl_config.useA85 = 0  # binary streams: smaller, and the pure-Python ASCII85 encoder is slow
     _fonts()

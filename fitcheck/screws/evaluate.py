@@ -29,6 +29,7 @@ from .schema import (
     SHEAR_SAFETY,
     SLIP_SAFETY,
     ScrewJointInput,
+    _count,
     _default_outer_diameter,
     _hole_diameter,
     _pattern_xy_raw,
@@ -114,6 +115,9 @@ def evaluate(inp: ScrewJointInput) -> ScrewJointResult:
     -------
     ScrewJointResult
     """
+    for k in ("count", "slip_interfaces"):  # a hand-made input may hold nan, inf or a float
+        if getattr(inp, k, None) is not None:
+            _count(getattr(inp, k), k)
     with warnings.catch_warnings(record=True) as caught:
         warnings.simplefilter("always")
         res = _evaluate(inp)

@@ -588,7 +588,7 @@ def _load_kind(x, k):
 
 
 def _count(x, k):
-    if isinstance(x, bool) or not isinstance(x, int | float) or x != int(x) or not 1 <= x <= 1000:
+    if isinstance(x, bool) or not isinstance(x, int | float) or not 1 <= x <= 1000 or x != int(x):
         raise InputError(k, x, "a whole number from 1 to 1000")
     return int(x)
 

@@ -17,7 +17,7 @@ from fitcheck import case as casefile
 from fitcheck import report
 from fitcheck.errors import InputError, InputErrors
 from fitcheck.tomlread import read_toml_bytes
-from fitcheck.ui import app, state, widgets
+from fitcheck.ui import app, inch, state, widgets
 
 TITLE_KEYS = casefile.TITLE_KEYS
 PENDING = "cf.pending"      # a parsed upload with problems, waiting for "open anyway"
@@ -106,6 +106,14 @@ def _open_pending() -> None:
         ss["cf.opened"] = "the uploaded file (with the problems marked on the joint pages)"
 
 
+def _new_case() -> None:
+    """An empty case: the format version and a title block to fill in, no joints."""
+    state.replace_doc({"format_version": casefile.FORMAT_VERSION,
+                       "title": {k: "" for k in ("project", "part")}})
+    st.session_state["cf.opened"] = "a new, empty case: fill in its title block and add joints " \
+        "on the pages Press fit, Bearing seats and Housing screws"
+
+
 def _restore_demo() -> None:
     state.replace_doc(state.demo_doc())
     st.session_state[SOURCE] = casefile.demo_text()
@@ -124,15 +132,19 @@ def render() -> None:
                                   "replaces the open case; nothing in the file is executed.")
         _handle_upload(upload)
         if ss.get("cf.opened"):
-            st.success(f"Opened {ss.pop('cf.opened')}.")
+            st.success(f"Opened {widgets.esc(ss.pop('cf.opened'))}.")
         for e in ss.get("cf.upload_errors", []):
             st.error(widgets.error_text(e), icon=":material/error:")
         if ss.get(PENDING) is not None:
             st.button("Open it anyway and correct it here", key="cf.open_anyway",
                       on_click=_open_pending)
+        st.button("Start a new, empty case", key="cf.new", on_click=_new_case,
+                  icon=":material/note_add:", help="Replaces the open case with an empty one "
+                  "(title block only). Download your case first to keep it.")
         st.button("Restore the demo case", key="cf.demo", on_click=_restore_demo,
                   help="Replaces the open case with the demo (gearhead of a benchtop pump). "
                   "Download your case first to keep it.")
+        inch.demo_button()  # the inch demo (fitcheck/ui/inch.py)
         st.subheader("Save the case")
         try:
             text = case_text()
