@@ -178,3 +178,30 @@ def test_study_and_search_use_the_chosen_design():
     names = {c.name for c in s_pl.passing[0].checks}
     assert "hub plastic zone at tightest fit" in names
     assert math.isfinite(s_pl.passing[0].checks[0].value)
+
+
+def test_wall_stress_chart_shows_the_plastic_zone():
+    from fitcheck.plots.pressfit import plot_wall_stresses
+
+    r = _eval(dict(ALU_GEAR, design="elastic-plastic"))
+    prof = r.wall_profile(200)
+    inside = prof["r_hub"] < r.plastic_zone_diameter / 2.0
+    k = 2.0 / math.sqrt(3.0) * 260.0
+    assert np.allclose((prof["st_hub"] - prof["sr_hub"])[inside], k, rtol=1e-9)  # at yield in the zone
+    assert np.all((prof["st_hub"] - prof["sr_hub"])[~inside] <= k * (1 + 1e-9))
+    fig = plot_wall_stresses(r)
+    labels = [t.get_text() for t in fig.axes[0].get_legend().get_texts()]
+    assert any(t.startswith(f"plastic zone to Ø {r.plastic_zone_diameter:.2f} mm") for t in labels)
+    el = plot_wall_stresses(_eval(ALU_GEAR))
+    assert not any("plastic zone" in t.get_text() for t in el.axes[0].get_legend().get_texts())
+
+
+def test_report_shows_the_plastic_zone_check():
+    from fitcheck import case as case_mod
+    from fitcheck import report
+
+    lines = ["format_version = 1", "[[pressfit]]"] + [f'{k} = "{v}"' for k, v in ALU_GEAR.items()] + ['design = "elastic-plastic"']
+    res = case_mod.evaluate(case_mod.loads("\n".join(lines) + "\n"))
+    html = report.to_html(report.build(res, plots=False))
+    assert "hub plastic zone at tightest fit" in html and "exceeded by" in html
+    assert "Elastic-plastic design" in html

@@ -303,6 +303,8 @@ def plastic_zone_diameter(delta, d, di, Do, Es, nus, Eh, nuh, Reh, kappa=KAPPA_D
     beta = 0.5 * (Eh * _shaft_compliance(d, di, Es, nus) - (1.0 - nuh))
     xi = _a(delta) * Eh / (d * k)
     alpha = 1.0 - beta * qa2
+    if not np.any(xi > alpha + beta):  # h(1) >= 0 everywhere: every hub stays elastic
+        return _out(d * np.ones(np.broadcast(xi, alpha).shape))
     with np.errstate(divide="ignore", invalid="ignore"):
         xmax = np.where(qa2 > 0.0, 1.0 / qa2, np.inf)
         x = np.clip(xi / (alpha + beta), 1.0, xmax)
@@ -361,7 +363,7 @@ def _pressure(delta, Dpl, d, di, Do, Es, nus, Eh, nuh, Reh, kappa):
     return np.maximum(np.where(_a(Dpl) > d, p_pl, p_el), 0.0)
 
 
-def state_pressures(delta_a, delta_b, d, di, Do, Es, nus, Eh, nuh, Reh, kappa=KAPPA_DIN):
+def state_pressures(delta_a, delta_b, d, di, Do, Es, nus, Eh, nuh, Reh, kappa=KAPPA_DIN, first=True):
     r"""Pressures of two states of one joint (e.g. assembly and operation) with a yielding hub.
 
     The hub yields at the larger interference of the two, :math:`\delta_{peak}`, and unloads
@@ -377,6 +379,8 @@ def state_pressures(delta_a, delta_b, d, di, Do, Es, nus, Eh, nuh, Reh, kappa=KA
         Effective diametral interferences of both states [mm].
     d, di, Do, Es, nus, Eh, nuh, Reh, kappa
         As :func:`contact_pressure`.
+    first : bool
+        False skips the first-loading pressure of state a (returned as NaN).
 
     Returns
     -------
@@ -403,8 +407,13 @@ def state_pressures(delta_a, delta_b, d, di, Do, Es, nus, Eh, nuh, Reh, kappa=KA
     c_p = 1.0 / (d_ * (((1.0 + qa2) / (1.0 - qa2) + nuh) / Eh + _shaft_compliance(d_, di, Es, nus)))
     pa = np.maximum(p_peak - (peak - da) * c_p, 0.0)
     pb = np.maximum(p_peak - (peak - db) * c_p, 0.0)
-    Dpl_a = plastic_zone_diameter(da, d, di, Do, Es, nus, Eh, nuh, Reh, kappa)
-    pa_first = _pressure(da, Dpl_a, d, di, Do, Es, nus, Eh, nuh, Reh, kappa)
+    if not first:
+        pa_first = np.full(np.shape(pa), np.nan)
+    elif np.all(da >= db):  # state a is the peak
+        pa_first = np.broadcast_to(p_peak, np.shape(pa))
+    else:
+        Dpl_a = plastic_zone_diameter(da, d, di, Do, Es, nus, Eh, nuh, Reh, kappa)
+        pa_first = _pressure(da, Dpl_a, d, di, Do, Es, nus, Eh, nuh, Reh, kappa)
     return _out(pa_first), _out(pa), _out(pb), _out(Dpl)
 
 

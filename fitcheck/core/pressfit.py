@@ -234,7 +234,7 @@ def _block(*, interference_min, interference_max, d, L, di, Do, Es, nus, alphas,
 
     if design == "elastic-plastic":  # partly plastic hub, DIN 7190-1:2017 (core/elastoplastic.py)
         ep_args = (d, di, Do, Es, nus, Eh, nuh, Rph)
-        _f, p_min_asm, p_min_op, _z = _ep.state_pressures(de_min_asm, de_min_op, *ep_args)
+        _f, p_min_asm, p_min_op, _z = _ep.state_pressures(de_min_asm, de_min_op, *ep_args, first=False)
         p_max_asm, _a, p_max_op, d_pl = _ep.state_pressures(de_max_asm, de_max_op, *ep_args)
     else:
         p_min_asm = np.maximum(de_min_asm * c_p, 0.0)

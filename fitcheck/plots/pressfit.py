@@ -21,6 +21,7 @@ def plot_wall_stresses(result, ax=None) -> Figure:
 
     The governing condition (room temperature at standstill, or operating with
     temperature and centrifugal stresses) is the one with the larger stress at the hub bore.
+    In the elastic-plastic design the hub's plastic zone is shaded.
     """
     fig, ax = _axes(ax)
     prof = result.wall_profile()
@@ -33,6 +34,10 @@ def plot_wall_stresses(result, ax=None) -> Figure:
         ax.plot(r, prof[f"vm_{part}"], "--", color="tab:red",
                 **({"label": "von Mises σv"} if part == "shaft" else kw))
     ax.axvline(result.diameter / 2.0, color="0.4", lw=0.8)
+    d_pl = prof.get("plastic_zone_diameter", result.diameter)
+    if d_pl > result.diameter:  # elastic-plastic design: the yielded ring of the hub
+        ax.axvspan(result.diameter / 2.0, d_pl / 2.0, color="tab:red", alpha=0.12, lw=0,
+                   label=f"plastic zone to Ø {d_pl:.2f} mm ({(d_pl - result.diameter) / 2.0:.2f} mm deep)")
     ax.axhline(0.0, color="0.6", lw=0.6)
     h, s = result.hub_material, result.shaft_material
     ax.axhline(h.Rp02, color="tab:red", lw=0.6, ls=":", label=f"Rp0.2 hub ({h.name})")

@@ -13,7 +13,7 @@ import streamlit as st
 
 from fitcheck import checks, fits, pressfit
 from fitcheck.errors import InputError
-from fitcheck.ui import app, charts, joints, state, unitsys, widgets
+from fitcheck.ui import app, charts, joints, pressfit_design, state, unitsys, widgets
 from fitcheck.ui.joints import Field
 
 TABLE, PREFIX = "pressfit", "pf"
@@ -32,6 +32,7 @@ def fields() -> list[tuple[str, list[Field]]]:
         ("Assembly", [Field("assembly", "Assembly", ("press", "shrink")),
                       "press_force_limit", "temperature_shaft_cooled", "joining_clearance"]),
         ("Required safeties", ["slip_safety", "yield_safety", "fracture_safety"]),
+        pressfit_design.design_group(),
     ])
 
 
@@ -127,6 +128,7 @@ def _summary(r: pressfit.PressFitResult, system: str, name: str) -> None:
     c[1].metric("Shaft yield safety", unitsys.num(r.shaft_yield_safety, 3))
     c[2].metric("Loosening speed", unitsys.show(r.loosening_speed, "speed", system, digits=3),
                 help="speed at which the loosest fit loses all its pressure")
+    pressfit_design.show_plastic_zone(r, system)
     _capacity_chart(r, system, name)
 
 
