@@ -205,3 +205,28 @@ def test_report_shows_the_plastic_zone_check():
     html = report.to_html(report.build(res, plots=False))
     assert "hub plastic zone at tightest fit" in html and "exceeded by" in html
     assert "Elastic-plastic design" in html
+
+
+def test_cli_json_carries_the_design_fields(cli, tmp_path):
+    m = dict(ALU_GEAR, interference_min="70 um", interference_max="100 um", design="elastic-plastic")
+    f = tmp_path / "alu.toml"
+    f.write_text("\n".join(["format_version = 1", "[[pressfit]]"] + [f'{k} = "{v}"' for k, v in m.items()])
+                 + "\n", encoding="utf-8")
+    code, out, err = cli("pressfit", str(f), "--json")
+    assert code == 0, err
+    j = json.loads(out)["pressfits"][0]
+    r = _eval(m)
+    assert j["design"] == "elastic-plastic"
+    assert j["plastic_zone_diameter_mm"] == pytest.approx(r.plastic_zone_diameter) and r.plastic_zone_diameter > 20
+    assert j["plastic_utilisation"] == pytest.approx(r.plastic_utilisation)
+    code, out, _ = cli("pressfit", str(f))
+    assert "hub plastic zone at tightest fit" in out and "hub plastic zone Ø (tightest; depth" in out
+
+
+def test_outer_diameter_growth_of_a_yielded_hub():
+    # the elastic ring outside the zone is at yield at D_pl: sigma_t(Do) = k·(D_pl/Do)² (Lamé)
+    r = _eval(dict(ALU_GEAR, design="elastic-plastic"))
+    k = 2.0 / math.sqrt(3.0) * 260.0
+    assert r.hub_outer_growth_max == pytest.approx(30.0 * k * (r.plastic_zone_diameter / 30.0) ** 2 / 70000.0)
+    sr, st = ep.hub_stresses(r.pressure_max, r.plastic_zone_diameter, 20.0, 30.0, 15.0, 260.0)
+    assert r.hub_outer_growth_max == pytest.approx(30.0 * st / 70000.0, rel=1e-9)

@@ -306,6 +306,9 @@ def _block(*, interference_min, interference_max, d, L, di, Do, Es, nus, alphas,
     # ---- deformations, assembly, loosening ------------------------------------------------------
     hub_growth = 2.0 * p_max_asm * d * qa / (Eh * (1.0 - qa2))
     bore_change = -2.0 * p_max_asm * di / (Es * (1.0 - qi2))
+    if design == "elastic-plastic":  # yielded hub: outer ring at yield, sigma_t(Do) = k·(D_pl/Do)²
+        hub_growth = np.where((d_pl > d) & (p_max_asm >= p_max),
+                              _ep.KAPPA_DIN * Rph * d_pl * d_pl / (Do * Eh), hub_growth)
     f_press = p_max_asm * (np.pi * d * L * mu_press)
     cool = alphas * d * (np.asarray(T_assembly, dtype=f64) - T_shaft_cooled)
     t_shrink = T_assembly + (dmax + joining_clearance - cool) / (alphah * d)
