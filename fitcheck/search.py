@@ -38,7 +38,15 @@ from . import CAUTION, fits
 from .checks import Check
 from .core import pressfit as _core
 from .errors import InputError
-from .pressfit import REF_HEAT, REF_HUB, REF_PRESS, REF_SHAFT, REF_SLIP, REF_SPEED, plastic_zone_check
+from .pressfit import (
+    REF_HEAT,
+    REF_HUB,
+    REF_PRESS,
+    REF_SHAFT,
+    REF_SLIP,
+    REF_SPEED,
+    plastic_zone_check,
+)
 
 __all__ = ["BearingSearchResult", "Candidate", "SearchResult", "SeatCandidate", "candidates",
            "search_bearing_seat", "search_fits"]
