@@ -57,11 +57,14 @@ KEYS: dict[str, str] = {
     "name": "name of the joint (text)",
     "thread": "thread designation: 'M6', 'M8x1', '#10-24 UNC', '1/4-20 UNC' (ISO 261 / ASME B1.1)",
     "property_class": "property class or grade: 4.6 … 12.9 (ISO 898-1), A2-70, A4-70, A4-80 (ISO 3506-1), "
-                      "'SAE 2', 'SAE 5', 'SAE 8' (SAE J429)",
+                      "'SAE 2', 'SAE 5', 'SAE 8' (SAE J429, 1/4 in and up), 'ASTM A574' (inch socket head cap "
+                      "screws, #0 and up)",
     "head": "head type: hex (ISO 4017), socket (ISO 4762), pan (ISO 7045), button (ISO 7380-1), "
             "countersunk (ISO 10642); default hex",
-    "hole": "clearance hole: fine, medium, coarse (ISO 273) or a diameter such as '6.6 mm'; default medium",
-    "washer": "plain washer under the head (ISO 7089 with hex heads, ISO 7092 otherwise): true/false; default false",
+    "hole": "clearance hole: fine, medium, coarse (ISO 273; inch sizes ASME B18.2.8 close, normal, loose — either "
+            "name) or a diameter such as '6.6 mm'; default medium",
+    "washer": "plain washer under the head (ISO 7089 with hex heads, ISO 7092 otherwise; inch: ASME B18.22.1 Type B "
+              "regular / narrow): true/false; default false",
     "joint": "'tapped' (screw in a tapped housing, VDI ESV) or 'through' (bolt and nut, DSV); default tapped",
     "layers": "clamped parts from the head down: array of {thickness = '8 mm', material = 'EN AW-6082-T6'} "
               "(material: a name of data/materials.csv or an inline table)",
@@ -92,6 +95,12 @@ KEYS: dict[str, str] = {
                             "screw spacing of the pattern (a single screw: a wide plate)",
     "rolled_after_heat_treatment": "thread rolled after heat treatment (higher fatigue limit): true/false; "
                                    "default false",
+    "transverse_load": "kind of transverse load for the slip safety: 'static' or 'alternating' (VDI 2230-1:2015, "
+                       "R12); default 'alternating' (the safe side)",
+    "slip_safety": "required safety against slip S_G; default 1.2 for a static, 1.8 for an alternating "
+                   "transverse load (VDI 2230-1:2015, R12)",
+    "engagement_allowance": "length added to the effective engagement m_eff for the countersink of the tapped "
+                            "hole and the chamfered screw end [length]; default 2 pitches",
     "clamp_eccentricity": "eccentric clamping s_sym: distance of the screw axis from the centre line of the "
                           "interface strip, positive towards the load side [length]; default 0 (VDI 2230-1 "
                           "eccentric joint, step R3)",
@@ -114,6 +123,12 @@ KEYS: dict[str, str] = {
     "gasket_alpha": "thermal expansion coefficient of the gasket [1/K]; default 0 (not counted)",
 }
 
+#: Required safety against slip by kind of transverse load (VDI 2230-1:2015, step R12).
+SLIP_SAFETY = {"static": 1.2, "alternating": 1.8}
+#: Required safety of the screw against shearing off if the joint slips (VDI 2230-1:2015, R12).
+SHEAR_SAFETY = 1.1
+NM_TO_LBF_IN = 1000.0 / (4.4482216152605 * 25.4)   # N·m → lbf·in (NIST SP 811)
+
 #: Calculation steps in words with the clause or equation they follow, for the report.
 METHOD_NOTES: list[tuple[str, str]] = [
     ("Thread dimensions d2 = d − 0.649519 P, d3 = d − 1.226869 P; stress area As = π/4·((d2 + d3)/2)² "
@@ -126,10 +141,16 @@ METHOD_NOTES: list[tuple[str, str]] = [
      "each layer's modulus. y is limited to the cone's own limiting diameter DA,Gr (fixed point of "
      "y = 1 + w·βL·tan φ): a wide plate, or any D_A beyond DA,Gr, takes that value (this program's "
      "reading; the printed equations grow without bound in ln y); by default D_A is the screw spacing "
-     "of the pattern",
+     "of the pattern, never below the head's bearing diameter dw (a pattern whose heads would overlap is "
+     "refused). Effect of the cap: beyond DA,Gr δP is the full cone's; without the cap tan φ and the "
+     "clamp stiffness would keep growing with D_A: Φ would fall (the cap is safe for screw force and "
+     "fatigue) while the embedding loss and the clamped parts' share of FA would grow (the cap gives a "
+     "few per cent more FKR,min: unsafe side, stated)",
      "VDI 2230-1:2015, 5.1.2.2–5.1.2.3"),
     ("Shigley's frustum (30°) and the exponential fit of the member stiffness are computed alongside "
-     "for comparison only", "Shigley, 10th ed., eqs. (8-20), (8-23)"),
+     "for comparison only; a tapped joint as Shigley's cap screw: effective grip l' = h + d/2 (tapped part "
+     "at least d thick), two frusta meeting at l'/2, the lower one partly in the housing",
+     "Shigley, 10th ed., Sec. 8-5, eqs. (8-20), (8-23)"),
     ("Load factor Φn = n·δP/(δS + δP); load introduction factor n = 0.5 unless given (estimate for a "
      "load introduced inside the clamped parts; n = 1 under the head, smaller when introduced near the "
      "interface)", "VDI 2230-1:2015, 5.2.2 and 5.3.1, step R3"),
@@ -142,26 +163,41 @@ METHOD_NOTES: list[tuple[str, str]] = [
     ("Most loaded screw of the pattern: FA = Faxial/n + Mtilt·u/Σu² (rigid flange, worst tilting axis "
      "through the centroid), FQ = Ftrans/n + T·rmax/Σr²", "VDI 2230-1:2015, 3.x (rigid-flange model); "
      "Shigley, 10th ed., Sec. 8-12"),
-    ("Required clamp load FKerf = max(required clamp load, FQ/(qF·μT)); FM,min = FKerf + (1 − Φ)·FA + "
-     "FZ + thermal loss; FM,max = αA·FM,min with αA from the tightening method",
-     "VDI 2230-1:2015, steps R1, R2, R5, R6; Table A8"),
+    ("Required clamp load FKerf = max(required clamp load, S_G·FQ/(qF·μT)); FM,min = FKerf + (1 − Φ)·FA + "
+     "FZ + thermal loss; FM,max = αA·FM,min", "VDI 2230-1:2015, steps R1, R2, R5, R6, R12"),
+    ("Preload scatter: αA = FM,max/FM,min. One torque gives FM(μmin)/FM(μmax) = α_μ = (0.16 P + 0.58 d2 "
+     "μG,max + μK,max DKm/2)/(0.16 P + 0.58 d2 μG,min + μK,min DKm/2); the scatter used is "
+     "αA = max(αA of Table A8, α_μ), so the smallest preload FM,set/αA never exceeds the preload of the "
+     "same torque at the highest friction; the result says which of the two governs",
+     "VDI 2230-1:2015, 5.4.3, 5.5.1, Table A8; ISO 16047"),
     ("Permissible assembly preload FM,zul = A0·ν·Rp0.2/√(1 + 3[3/2·d2/d0·(P/(π d2) + 1.155 μG,min)]²), "
      "d0 = dS; check FM,max ≤ FM,zul", "VDI 2230-1:2015, 5.5.1, step R7; Table A1"),
-    ("Tightening torque MA = FM,zul·(0.16 P + 0.58 d2 μG,min + μK,min·DKm/2), DKm = (dw + dh)/2; the "
-     "(with a washer: the washer's hole); the preload this torque gives at the highest friction is "
-     "reported; Shigley's T = K·F·d (K = 0.2) "
-     "as a cross-check", "VDI 2230-1:2015, step R13; ISO 16047; Shigley, 10th ed., eq. (8-27), Table 8-15"),
+    ("Tightening torque MA = FM,zul·(0.16 P + 0.58 d2 μG,min + μK,min·DKm/2), DKm = (dw + dh)/2 "
+     "(with a washer: the washer's hole); the wrench setting is MA rounded DOWN to a settable step "
+     "(0.05 N·m below 5 N·m, 0.1 below 20, 0.5 below 100, 1 above; lbf·in likewise) and every preload "
+     "after it is scaled by M_set/MA; one instruction 'Tighten to X N·m (Y lbf·in)' with method and "
+     "preload range. Shigley's T = K·F·d (K = 0.2) is a rough cross-check only, not a setting",
+     "VDI 2230-1:2015, step R13; ISO 16047; Shigley, 10th ed., eq. (8-27), Table 8-15"),
     ("Working stress: FS,max = FM,zul + Φ·FA + thermal gain; σred,B = √(σ² + 3(kτ·τ)²) with kτ = 0.5; "
      "yield safety Rp0.2/σred,B ≥ 1", "VDI 2230-1:2015, step R8"),
-    ("Residual clamp load FKR,min = FM,zul/αA − (1 − Φ)·FA − FZ − thermal loss ≥ required clamp load "
-     "(≥ 0: no separation) and ≥ FQ/(qF·μT) (no slip)", "VDI 2230-1:2015, steps R12 and R13 (R2)"),
+    ("Residual clamp load FKR,min = FM,set/αA − (1 − Φ)·FA − FZ − thermal loss ≥ required clamp load "
+     "(≥ 0: no separation)", "VDI 2230-1:2015, step R13 (R2)"),
+    ("Slip: S_G = FKR,min·qF·μT/FQ ≥ 1.2 (static) or 1.8 (alternating transverse load, the default); "
+     "the screw in shear if the joint slips: τQ = FQ/Aτ (Aτ = π d3²/4 when the thread reaches the "
+     "interface, else the shank) against τB = (τB/Rm)·Rm (Table 7), safety ≥ 1.1",
+     "VDI 2230-1:2015, step R12, Table 7"),
     ("Surface pressure p = max(FM,zul, FV,max + Φ·FA + thermal gain)/Ap, Ap = π/4·(dw² − dh²) under the "
-     "head (with a washer: its outside diameter on the part), and under the nut of a through bolt, "
-     "against p_G of the material touched", "VDI 2230-1:2015, step R10, Table A9"),
-    ("Length of engagement in a tapped housing: internal-thread shear area 0.875·π·d·L and external "
-     "0.75·π·D1·L (basic profile) against the screw's breaking load Rm·As; τB of the housing, "
-     "τB = 0.6·Rm for the screw (common practice); nuts of matching class (ISO 898-2) are not checked",
-     "FED-STD-H28/2B, App. A; principle of VDI 2230-1:2015, step R11"),
+     "head; under a washer the load spreads through it with the deformation cone's angle: "
+     "Ap = π/4·(min(dW, dw + 2 hS tan φ)² − dh²), not the whole washer; under the nut of a through bolt; "
+     "against p_G of the material touched", "VDI 2230-1:2015, step R10, 5.1.2 (cone angle), Table A9"),
+    ("Length of engagement in a tapped housing: shear areas of the internal thread (at d min, D2 max) and "
+     "of the screw thread (at D1 max, d2 min) with the 6g/6H limits of ISO 965-1; strength ratio R_S; "
+     "nut dilation C1 (1 in a tapped hole), thread bending C2 (screw) and C3 (internal thread), each "
+     "taken ≤ 1; m_eff = Rm·As/min(τBM·ASGM·C1·C3, τBS·ASGS·C1·C2) per mm; the length for the "
+     "drawing m_ges = m_eff + allowance for the countersink and the chamfered screw end (default 2 P, "
+     "key engagement_allowance); τB of the housing, τB/Rm of the screw from Table 7; Unified threads "
+     "use the ISO 965-1 formulas for their d and P (an estimate of class 2A/2B); nuts of matching class "
+     "(ISO 898-2) are not checked", "VDI 2230-1:2015, 5.5.5, step R11; ISO 965-1"),
     ("Fatigue: σa = Φ·FA/(2 As) (load cycling between 0 and FA) against σASV = 0.85·(150/d + 45) MPa "
      "(rolled before heat treatment) or σASG = (2 − FSm/F0.2min)·σASV, not below σASV (rolled after; "
      "FSm = FM,zul − FZ + Φ·FA/2, the largest mean force in service); safety ≥ 1.2",
@@ -355,6 +391,9 @@ class ScrewJointInput:
     shank_length: float = 0.0
     clamp_outer_diameter: float | None = None
     rolled_after_heat_treatment: bool = False
+    transverse_load: str = "alternating"
+    slip_safety: float | None = None
+    engagement_allowance: float | None = None
     clamp_eccentricity: float | None = None
     load_eccentricity: float | None = None
     interface_depth: float | None = None
@@ -413,11 +452,12 @@ class ScrewJointInput:
                 get("head", lambda x, k: threads.head(head, th.size, k))
         if "hole" in m:
             h = m["hole"]
-            if isinstance(h, str) and h.strip().lower() in threads.HOLE_SERIES:
+            series = threads.HOLE_SERIES + tuple(threads.HOLE_ALIASES)
+            if isinstance(h, str) and h.strip().lower() in series:
                 v["hole"] = h.strip().lower()
             elif isinstance(h, str) and h.strip().isalpha():
-                errs.add(InputError(f"{field}.hole", h, "fine, medium, coarse or a diameter such as '6.6 mm'",
-                                    did_you_mean(h, threads.HOLE_SERIES)))
+                errs.add(InputError(f"{field}.hole", h, "fine, medium, coarse (inch: close, normal, loose) or a "
+                                    "diameter such as '6.6 mm'", did_you_mean(h, series)))
             else:
                 dh = get("hole", lambda x, k: to_core(x, "length", k, lo=0.0, lo_open=True))
                 if dh is not None:
@@ -505,6 +545,10 @@ class ScrewJointInput:
         v["clamp_outer_diameter"] = get("clamp_outer_diameter",
                                         lambda x, k: to_core(x, "length", k, lo=0.0, lo_open=True))
         v["rolled_after_heat_treatment"] = get("rolled_after_heat_treatment", _bool, False)
+        v["transverse_load"] = get("transverse_load", _load_kind, "alternating")
+        v["slip_safety"] = get("slip_safety", lambda x, k: number(x, k, lo=1.0, hi=10.0))
+        v["engagement_allowance"] = get("engagement_allowance",
+                                        lambda x, k: to_core(x, "length", k, lo=0.0, hi=100.0))
         _eccentric_keys(m, v, get, field, errs)
         v["gasket"] = _gasket_keys(m, get, field, errs)
         if th is not None and "head" in v:
@@ -547,6 +591,11 @@ class ScrewJointInput:
         })
         if self.clamp_outer_diameter is not None:
             out["clamp_outer_diameter"] = f"{self.clamp_outer_diameter!r} mm"
+        out["transverse_load"] = self.transverse_load
+        if self.slip_safety is not None:
+            out["slip_safety"] = self.slip_safety
+        if self.engagement_allowance is not None:
+            out["engagement_allowance"] = f"{self.engagement_allowance!r} mm"
         for key in ("clamp_eccentricity", "load_eccentricity", "interface_depth", "interface_width"):
             if getattr(self, key) is not None:
                 out[key] = f"{getattr(self, key)!r} mm"
@@ -559,6 +608,13 @@ def _bool(x, k):
     if not isinstance(x, bool):
         raise InputError(k, x, "true or false")
     return x
+
+
+def _load_kind(x, k):
+    kind = str(x).strip().lower()
+    if kind not in SLIP_SAFETY:
+        raise InputError(k, x, "'static' or 'alternating'", did_you_mean(kind, SLIP_SAFETY))
+    return kind
 
 
 def _count(x, k):
@@ -670,9 +726,27 @@ def _geometry_checks(th, v, m, field, errs) -> None:
         errs.add(InputError(f"{field}.hole", m.get("hole", hole), f"a hole smaller than the head's bearing "
                             f"diameter dw = {hd.dw:g} mm"))
     da = v.get("clamp_outer_diameter")
-    if da is not None and da <= dh:
+    if da is not None and da < hd.dw:
         errs.add(InputError(f"{field}.clamp_outer_diameter", m.get("clamp_outer_diameter"),
-                            f"a diameter larger than the hole ({dh:g} mm)"))
+                            f"a diameter not below the head's bearing diameter dw = {hd.dw:g} mm (the substitute "
+                            "body carries the whole bearing face)"))
+    # screws of a pattern must not stand closer than their heads (or washers) are wide
+    count = v.get("count") or 1
+    if count >= 2 and (v.get("bolt_circle") is not None or v.get("positions") is not None):
+        x, y = _pattern_xy_raw(v.get("positions"), v.get("bolt_circle"), count)
+        gap = _default_outer_diameter(x, y)
+        width, what = hd.dk, f"head diameter dk = {hd.dk:g} mm"
+        if v.get("washer"):
+            try:
+                w = threads.washer(th.size, v["head"])
+                if w.d2 > width:
+                    width, what = w.d2, f"washer outside diameter {w.d2:g} mm"
+            except InputError:
+                pass
+        if gap < width:
+            key = "positions" if v.get("positions") is not None else "bolt_circle"
+            errs.add(InputError(f"{field}.{key}", m.get(key), f"screws at least one {what} apart (the "
+                                f"heads would overlap: the closest two are {gap:.3g} mm apart)"))
 
 
 # ---------------------------------------------------------------------------- result
@@ -734,6 +808,34 @@ class ScrewJointResult:
     k_exponential_shigley: float
     checks: tuple[Check, ...]
     warnings: tuple[str, ...] = ()
+    # preload scatter (VDI 2230-1:2015, 5.4.3): the method's αA, the friction range's, which governs
+    alpha_A_method: float = math.nan
+    alpha_A_friction: float = math.nan
+    scatter_governs: str = ""
+    # the wrench setting and the preloads it gives
+    tightening_torque_set: float = math.nan
+    tightening_torque_set_lbf_in: float = math.nan
+    preload_set_max: float = math.nan
+    preload_set_min: float = math.nan
+    tightening_instruction: str = ""
+    # slip (R12)
+    slip_safety: float = math.nan
+    slip_safety_required: float = math.nan
+    transverse_load: str = ""
+    shear_stress: float = math.nan
+    shear_strength: float = math.nan
+    shear_safety: float = math.nan
+    # surface pressure under a washer: diameter the load spreads to
+    bearing_diameter_effective: float = math.nan
+    # engagement (R11)
+    engagement_effective_min: float = math.nan
+    engagement_allowance: float = math.nan
+    strength_ratio: float = math.nan
+    C1: float = math.nan
+    C2: float = math.nan
+    C3: float = math.nan
+    engagement_strips: str = ""
+    shigley_grip: float = math.nan
     load_factor_eccentric: float = math.nan
     load_factor_concentric: float = math.nan
     bending_stress: float = 0.0
@@ -765,14 +867,16 @@ class ScrewJointResult:
         Returns
         -------
         dict
-            ``F_V`` smallest preload in service, FM,zul/αA − FZ − thermal loss [N];
+            ``F_V`` smallest preload in service, FM,set/αA − FZ − thermal loss [N] (FM,set: the
+            preload of the wrench setting at the lowest friction, FM,zul·M_set/M_A);
             ``f_S``, ``f_P`` elongation of the screw and compression of the clamped parts under
             F_V [mm]; ``F_S`` screw force under load, F_V + Φ·F_A [N]; ``f_A`` added elongation
             Φ·F_A·δS [mm]; ``F_KR`` residual clamp load F_V − (1 − Φ)·F_A [N]; ``F_A`` [N];
             ``F_M_zul`` [N].
         """
         th_loss = max(0.0, -self.dF_th_cold, -self.dF_th_warm)
-        F_V = max(self.F_M_zul / self.alpha_A - self.F_Z - th_loss, 0.0)
+        F_set = self.preload_set_max if math.isfinite(self.preload_set_max) else self.F_M_zul
+        F_V = max(F_set / self.alpha_A - self.F_Z - th_loss, 0.0)
         phi = self.load_factor_eccentric if math.isfinite(self.load_factor_eccentric) else self.load_factor
         dF_S = phi * self.F_A
         return {"F_V": F_V, "f_S": F_V * self.delta_S, "f_P": F_V * self.delta_P,
@@ -816,6 +920,23 @@ class ScrewJointResult:
             "gasket_pressure_MPa": self.gasket_pressure,
             "warnings": list(self.warnings),
             "checks": [c.to_dict() for c in self.checks], "ok": self.ok,
+            "tightening_factor_method": self.alpha_A_method,
+            "tightening_factor_friction": self.alpha_A_friction,
+            "preload_scatter_governs": self.scatter_governs,
+            "tightening_torque_set_Nm": self.tightening_torque_set / 1000.0,
+            "tightening_torque_set_lbf_in": self.tightening_torque_set_lbf_in,
+            "preload_set_max_N": self.preload_set_max, "preload_set_min_N": self.preload_set_min,
+            "tightening_instruction": self.tightening_instruction,
+            "slip_safety": self.slip_safety, "slip_safety_required": self.slip_safety_required,
+            "transverse_load": self.transverse_load, "screw_shear_stress_MPa": self.shear_stress,
+            "screw_shear_strength_MPa": self.shear_strength, "screw_shear_safety": self.shear_safety,
+            "bearing_diameter_effective_mm": self.bearing_diameter_effective,
+            "engagement_effective_min_mm": self.engagement_effective_min,
+            "engagement_allowance_mm": self.engagement_allowance,
+            "engagement_strength_ratio": self.strength_ratio, "engagement_C1": self.C1,
+            "engagement_C2": self.C2, "engagement_C3": self.C3,
+            "engagement_strips_first": self.engagement_strips,
+            "shigley_effective_grip_mm": self.shigley_grip,
         }
 
     def to_json(self) -> str:
@@ -972,13 +1093,14 @@ def _evaluate(inp: ScrewJointInput) -> ScrewJointResult:
     al = [la.material.alpha for la in inp.layers]
     n_parts = len(t)
     bearing_d, bearing_dh = hd.dw, dh
+    w = None
     if inp.washer:
         w = threads.washer(th.size, inp.head)
         t = [w.h, *t]
         E = [_STEEL_WASHER_E, *E]
         al = [_STEEL_WASHER_ALPHA, *al]
         n_parts += 1
-        bearing_d, bearing_dh = w.d2, max(dh, w.d1)
+        bearing_dh = max(dh, w.d1)
     i_gasket = None
     if inp.gasket is not None:
         # the gasket sits in the interface: above the tapped housing, or below the first part of a
@@ -1000,7 +1122,9 @@ def _evaluate(inp: ScrewJointInput) -> ScrewJointResult:
     x, y = _pattern_xy(inp)
     F_A, F_Q = core.pattern_loads(x, y, inp.axial_force, inp.tilting_moment, inp.transverse_force,
                                   inp.torque_about_axis)
-    D_A = inp.clamp_outer_diameter if inp.clamp_outer_diameter is not None else _default_outer_diameter(x, y)
+    D_A_given = inp.clamp_outer_diameter if inp.clamp_outer_diameter is not None else _default_outer_diameter(x, y)
+    # the substitute body never narrows below the head's bearing face (from_mapping refuses such input)
+    D_A = max(D_A_given, hd.dw)
 
     # --- compliances
     k_head = 0.5 if inp.head == "hex" else 0.4
@@ -1018,11 +1142,20 @@ def _evaluate(inp: ScrewJointInput) -> ScrewJointResult:
                                      hd.dw, dh, D_A, tphi, tapped, l_K)
         E[i_gasket] = float(unit[i_gasket]) * inp.gasket.stiffness
     delta_P = float(np.sum(core.clamp_compliance(z_top, z_bot, E, hd.dw, dh, D_A, tphi, tapped, l_K)))
-    # Shigley's frustum (30°, hole = bolt diameter as in the book) and its exponential fit
-    d_P_sh = float(np.sum(core.clamp_compliance(z_top, z_bot, E, hd.dw, th.d, D_A if math.isfinite(D_A)
-                                                else np.inf, math.tan(math.radians(30.0)), tapped, l_K)))
-    E_eq = l_K / float(np.sum(t / E))
-    k_exp = float(core.member_stiffness_exponential(E_eq, th.d, l_K))
+    # Shigley's frustum (30°, hole = bolt diameter as in the book) and its exponential fit. A cap screw
+    # in a tapped part: effective grip l' = h + d/2 (thick tapped part), two frusta meeting at l'/2, the
+    # lower one partly in the tapped part (Shigley, 10th ed., Sec. 8-5, Fig. 8-13 and the text beside it)
+    if tapped:
+        t_sh = np.append(t, 0.5 * th.d)
+        E_sh = np.append(E, inp.housing_material.E)
+    else:
+        t_sh, E_sh = t, E
+    zb_sh = np.cumsum(t_sh)
+    l_sh = float(zb_sh[-1])
+    d_P_sh = float(np.sum(core.clamp_compliance(zb_sh - t_sh, zb_sh, E_sh, hd.dw, th.d, np.inf,
+                                                math.tan(math.radians(30.0)), False, l_sh)))
+    E_eq = l_sh / float(np.sum(t_sh / E_sh))
+    k_exp = float(core.member_stiffness_exponential(E_eq, th.d, l_sh))
     n = inp.load_introduction
     phi = float(core.load_factor(n, delta_S, delta_P))
     phi_concentric = phi
@@ -1049,19 +1182,7 @@ def _evaluate(inp: ScrewJointInput) -> ScrewJointResult:
     th_loss = max(0.0, -dF_cold, -dF_warm)
     th_gain = max(0.0, dF_cold, dF_warm)
 
-    # --- required and permissible preloads
-    F_KQ = F_Q / (inp.slip_interfaces * inp.mu_interface) if F_Q > 0 else 0.0
-    F_Kab = 0.0
-    if ex is not None:
-        F_Kab = max(0.0, *(float(ecc.clamp_to_prevent_opening(F_A, ex["a"], ex["s"], u, ex["A_D"], ex["I_BT"]))
-                           for u in ex["edges"]))
-    F_K_req = max(inp.clamp_force_required + F_Kab, F_KQ)
-    if isinstance(inp.tightening, str):
-        alpha_A = threads.tightening_factor(inp.tightening)[1]
-    else:
-        alpha_A = float(inp.tightening)
-    F_M_min = F_K_req + (1.0 - phi) * F_A + F_Z + th_loss
-    F_M_max = alpha_A * F_M_min
+    # --- torque, friction and the scatter of the preload
     mu_G_min, mu_G_max = inp.mu_thread
     mu_K_min, mu_K_max = inp.mu_head
     ds = th.ds
@@ -1071,20 +1192,56 @@ def _evaluate(inp: ScrewJointInput) -> ScrewJointResult:
     D_Km = 0.5 * (hd.dw + (bearing_dh if inp.washer else dh))
     M_A = float(core.tightening_torque(F_M_zul, th.P, th.d2, mu_G_min, mu_K_min, D_Km))
     M_A_hi = float(core.tightening_torque(F_M_zul, th.P, th.d2, mu_G_max, mu_K_max, D_Km))
-    F_at_mu_max = F_M_zul * M_A / M_A_hi
+    # the wrench setting: M_A rounded down to a step a torque tool can be set to
+    M_set, M_set_lbf_in = _wrench_setting(M_A)
+    F_M_set = F_M_zul * M_set / M_A                       # preload of the set torque at the lowest friction
+    alpha_mu = float(core.friction_scatter_factor(th.P, th.d2, D_Km, mu_G_min, mu_G_max, mu_K_min, mu_K_max))
+    F_at_mu_max = F_M_zul / alpha_mu                      # M_A at the highest friction
+    if isinstance(inp.tightening, str):
+        alpha_method = threads.tightening_factor(inp.tightening)[1]
+    else:
+        alpha_method = float(inp.tightening)
+    # VDI 2230-1:2015, 5.4.3: αA = FM,max/FM,min. Under one torque the friction range entered alone
+    # spreads the preload by α_μ, so the joint scatters by at least α_μ: αA = max(Table A8, α_μ).
+    # Applied to every method, because the instruction this program gives is a torque (methods that
+    # set the preload otherwise - elongation, tensioning, yield point - are treated on the safe side).
+    alpha_A = max(alpha_method, alpha_mu)
+    scatter_governs = "friction range" if alpha_mu > alpha_method else "tightening method"
     T_sh = float(core.torque_shigley(threads.shigley_torque_factor("zinc_plated"), F_M_zul, th.d))
 
+    # --- required and permissible preloads
+    S_G_req = inp.slip_safety if inp.slip_safety is not None else SLIP_SAFETY[inp.transverse_load]
+    F_KQ = F_Q / (inp.slip_interfaces * inp.mu_interface) if F_Q > 0 else 0.0
+    F_Kab = 0.0
+    if ex is not None:
+        F_Kab = max(0.0, *(float(ecc.clamp_to_prevent_opening(F_A, ex["a"], ex["s"], u, ex["A_D"], ex["I_BT"]))
+                           for u in ex["edges"]))
+    F_K_req = max(inp.clamp_force_required + F_Kab, S_G_req * F_KQ)
+    F_M_min = F_K_req + (1.0 - phi) * F_A + F_Z + th_loss
+    F_M_max = alpha_A * F_M_min
+
     # --- service
-    F_KR = F_M_zul / alpha_A - (1.0 - phi) * F_A - F_Z - th_loss
+    F_M_set_min = F_M_set / alpha_A                        # smallest assembly preload of the set torque
+    F_KR = F_M_set_min - (1.0 - phi) * F_A - F_Z - th_loss
     F_S_max = F_M_zul + phi * F_A + th_gain
     W_p = math.pi * ds ** 3 / 16.0
     tau = float(core.thread_torque(F_M_zul, th.P, th.d2, mu_G_min)) / W_p
     sig_red = float(core.reduced_stress(F_S_max / th.As, tau, 0.5))
     S_F = pc.Rp02 / sig_red
 
-    # --- surface pressure
+    # --- slip (R12) and the screw in shear if the joint slips
+    S_G = float(core.slip_safety(F_KR, inp.slip_interfaces, inp.mu_interface, F_Q))
+    threaded_at_joint = l_shank < l_K
+    A_tau = math.pi / 4.0 * (th.d3 if threaded_at_joint else th.d) ** 2
+    tau_Q = F_Q / A_tau
+    tauB_S = pc.tauB_ratio * pc.Rm
+    S_A = tauB_S / tau_Q if tau_Q > 0 else math.inf
+
+    # --- surface pressure: under a washer the load spreads through it with the cone's angle
     first = inp.layers[0].material
-    pG, _ = _limits_for(first, "pG") if not inp.washer else _limits_for(first, "pG")
+    pG, _ = _limits_for(first, "pG")
+    if w is not None:
+        bearing_d = min(w.d2, hd.dw + 2.0 * w.h * tphi)
     A_p = math.pi / 4.0 * (bearing_d ** 2 - bearing_dh ** 2)
     F_p = max(F_M_zul, F_M_zul - F_Z + phi * F_A + th_gain)
     p = F_p / A_p
@@ -1095,16 +1252,25 @@ def _evaluate(inp: ScrewJointInput) -> ScrewJointResult:
         nut_dw = threads.head("hex", th.size).dw if ("hex", th.size) in threads._heads() else hd.dw
         p_nut = F_p / (math.pi / 4.0 * (nut_dw ** 2 - dh ** 2))
 
-    # --- engagement
+    # --- engagement (R11)
     L_min = math.nan
+    r11 = {}
     if tapped:
         _, tauB_M = _limits_for(inp.housing_material, "tauB")
-        L_min = float(core.min_engagement(th.As, pc.Rm, _TAU_RATIO_SCREW * pc.Rm, tauB_M,
-                                          th.d, th.d2, th.P)[0]) * _ENGAGEMENT_MARGIN
+        es, Td, Td2, TD1, TD2 = (float(v) for v in core.iso965_tolerances(th.d, th.P))
+        allowance = inp.engagement_allowance if inp.engagement_allowance is not None else 2.0 * th.P
+        r11 = core.engagement_r11(th.As, pc.Rm, tauB_S, tauB_M, th.d, th.P,
+                                  d_min=th.d + es - Td, d2_min=th.d2 + es - Td2,
+                                  D1_max=th.D1 + TD1, D2_max=th.d2 + TD2, allowance=allowance)
+        L_min = r11["m_ges"] * _ENGAGEMENT_MARGIN
+        if th.system == "unified":
+            warnings.warn("length of engagement of a Unified thread: the shear areas use the ISO 965-1 6g/6H "
+                          "tolerance formulas for its diameter and pitch (an estimate of class 2A/2B)",
+                          MethodRangeWarning, stacklevel=3)
 
     # --- eccentric joint: opening limit and bending of the screw
     sig_bend = 0.0
-    F_V_min = F_M_zul / alpha_A - F_Z - th_loss
+    F_V_min = F_M_set_min - F_Z - th_loss
     F_Aab = math.inf if phi >= 1.0 else max(F_V_min, 0.0) / (1.0 - phi)
     opening_edge = ""
     if ex is not None:
@@ -1129,26 +1295,41 @@ def _evaluate(inp: ScrewJointInput) -> ScrewJointResult:
         sigma_AS = float(core.fatigue_limit_rolled_before(th.d))
     S_D = sigma_AS / sigma_a if sigma_a > 0 else math.inf
 
+    method = inp.tightening if isinstance(inp.tightening, str) else f"αA = {alpha_method:g} given"
+    instruction = (f"Tighten to {M_set / 1000.0:g} N·m ({M_set_lbf_in:g} lbf·in), {method.replace('_', ' ')}: "
+                   f"preload {F_M_set_min / 1000.0:.3g} … {F_M_set / 1000.0:.3g} kN (αA = {alpha_A:.3g}, "
+                   f"μG {mu_G_min:g} … {mu_G_max:g}, μK {mu_K_min:g} … {mu_K_max:g})")
+
     checks = [
         Check("assembly preload", F_M_max, F_M_zul, "<=", "N", "VDI 2230-1:2015, R5–R7",
-              f"αA·FM,min with αA = {alpha_A:g} against FM,zul at ν = {inp.utilisation:g}"),
+              f"αA·FM,min with αA = {alpha_A:.3g} ({scatter_governs} governs: Table A8 {alpha_method:g}, "
+              f"friction range {alpha_mu:.3g}) against FM,zul at ν = {inp.utilisation:g}"),
         Check("working stress (yield safety)", S_F, 1.0, ">=", "", "VDI 2230-1:2015, R8",
               f"σred,B = {sig_red:.0f} MPa against Rp0.2 = {pc.Rp02:g} MPa"),
         Check("residual clamp load (separation)", F_KR, inp.clamp_force_required, ">=", "N",
-              "VDI 2230-1:2015, R2, R13", "least clamp load left in service at the smallest preload"),
+              "VDI 2230-1:2015, R2, R13", f"least clamp load left in service at the smallest preload "
+              f"FM,set/αA = {F_M_set_min:.0f} N ({scatter_governs} governs αA)"),
     ]
     if F_Q > 0:
-        checks.append(Check("residual clamp load (slip)", F_KR, F_KQ, ">=", "N", "VDI 2230-1:2015, R12",
-                            f"FQ = {F_Q:.0f} N per screw, μT = {inp.mu_interface:g}, qF = {inp.slip_interfaces}"))
+        checks.append(Check("slip safety S_G", S_G, S_G_req, ">=", "", "VDI 2230-1:2015, R12",
+                            f"S_G = FKR,min·qF·μT/FQ; FQ = {F_Q:.0f} N per screw, μT = {inp.mu_interface:g}, "
+                            f"qF = {inp.slip_interfaces}, {inp.transverse_load} transverse load"))
+        checks.append(Check("screw shear if the joint slips", S_A, SHEAR_SAFETY, ">=", "",
+                            "VDI 2230-1:2015, R12",
+                            f"τQ = FQ/Aτ = {tau_Q:.0f} MPa on the {'thread core d3' if threaded_at_joint else 'shank'}"
+                            f" against τB = {pc.tauB_ratio:g}·Rm = {tauB_S:.0f} MPa"))
     checks.append(Check("surface pressure under head", p, pG, "<=", "MPa", "VDI 2230-1:2015, R10, Table A9",
-                        f"on {first.name}" + (" under the washer" if inp.washer else "")))
+                        f"on {first.name}" + (f" under the washer (load spread to {bearing_d:.3g} mm)"
+                                              if inp.washer else "")))
     if not tapped:
         checks.append(Check("surface pressure under nut", p_nut, pG_nut, "<=", "MPa",
                             "VDI 2230-1:2015, R10, Table A9", f"on {inp.layers[-1].material.name}"))
     if tapped:
-        checks.append(Check("length of engagement", inp.engagement, L_min, ">=", "mm",
-                            "FED-STD-H28/2B App. A; VDI 2230-1:2015, R11",
-                            f"housing {inp.housing_material.name}"))
+        checks.append(Check("length of engagement", inp.engagement, L_min, ">=", "mm", "VDI 2230-1:2015, R11",
+                            f"housing {inp.housing_material.name}: m_eff = {r11['m_eff']:.2f} mm "
+                            f"(R_S = {r11['R_S']:.2f}, C1 = {r11['C1']:g}, C2 = {r11['C2']:.3f}, "
+                            f"C3 = {r11['C3']:.3f}, {r11['strips']} thread strips first) + "
+                            f"{r11['allowance']:.2f} mm countersink and runout"))
     if F_A > 0:
         checks.append(Check("fatigue of the thread", S_D, _FATIGUE_SAFETY, ">=", "", "VDI 2230-1:2015, R9",
                             f"σa = {sigma_a:.1f} MPa against σAS = {sigma_AS:.1f} MPa"
@@ -1180,8 +1361,37 @@ def _evaluate(inp: ScrewJointInput) -> ScrewJointResult:
         k_exponential_shigley=k_exp, checks=tuple(checks), load_factor_eccentric=phi,
         load_factor_concentric=phi_concentric, bending_stress=sig_bend, opening_force=F_Aab,
         clamp_for_opening=F_Kab, opening_edge=opening_edge,
-        beta_P=ex["beta_P"] if ex is not None else 0.0, gasket_pressure=gasket_p)
+        beta_P=ex["beta_P"] if ex is not None else 0.0, gasket_pressure=gasket_p,
+        alpha_A_method=alpha_method, alpha_A_friction=alpha_mu, scatter_governs=scatter_governs,
+        tightening_torque_set=M_set, tightening_torque_set_lbf_in=M_set_lbf_in, preload_set_max=F_M_set,
+        preload_set_min=F_M_set_min, tightening_instruction=instruction, slip_safety=S_G,
+        slip_safety_required=S_G_req, transverse_load=inp.transverse_load, shear_stress=tau_Q,
+        shear_strength=tauB_S, shear_safety=S_A, bearing_diameter_effective=bearing_d,
+        engagement_effective_min=r11.get("m_eff", math.nan),
+        engagement_allowance=r11.get("allowance", math.nan), strength_ratio=r11.get("R_S", math.nan),
+        C1=r11.get("C1", math.nan), C2=r11.get("C2", math.nan), C3=r11.get("C3", math.nan),
+        engagement_strips=r11.get("strips", ""), shigley_grip=l_sh)
 
 
 METHOD_NOTES += [(f"{step} (where the joint is eccentric or has a gasket)", ref)
                  for step, ref in ECCENTRIC_NOTES + GASKET_NOTES]
+
+
+def _wrench_setting(M_A: float) -> tuple[float, float]:
+    """The torque set point [N·mm] and the same in lbf·in: M_A rounded DOWN to a settable step.
+
+    Steps (common practice for torque tools): 0.01 N·m below 1 N·m, 0.05 below 5, 0.1 below 20,
+    0.5 below 100, 1 N·m above; lbf·in in steps of 0.1 below 10, 0.5 below 100, 1 above. Rounding
+    down keeps the preload at the lowest friction within FM,zul.
+
+    >>> _wrench_setting(9137.0)
+    (9100.0, 80.5)
+    """
+    Nm = M_A / 1000.0
+    step = 0.01 if Nm < 1 else 0.05 if Nm < 5 else 0.1 if Nm < 20 else 0.5 if Nm < 100 else 1.0
+    set_Nm = math.floor(Nm / step + 1e-9) * step
+    set_Nm = round(set_Nm, 2)
+    lbf = set_Nm * NM_TO_LBF_IN
+    lstep = 0.1 if lbf < 10 else 0.5 if lbf < 100 else 1.0
+    set_lbf = round(math.floor(lbf / lstep + 1e-9) * lstep, 1)
+    return set_Nm * 1000.0, set_lbf

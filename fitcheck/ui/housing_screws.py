@@ -153,6 +153,7 @@ def _summary(r: screws.ScrewJointResult, system: str, name: str) -> None:
     widgets.verdict_banner(r.ok, checks.worst(r.checks),
                            system)
     st.subheader(f"{r.name or 'Joint'}: {r.thread} – {r.property_class}")
+    st.markdown(f"**{r.tightening_instruction}**")
     f = lambda x: unitsys.show(x, "force", system)  # noqa: E731
     c = st.columns(3)
     c[0].metric("Permissible preload F_M,zul", f(r.F_M_zul),
