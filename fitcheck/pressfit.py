@@ -16,9 +16,11 @@ Method (see :data:`METHOD_NOTES`): Lamé thick-cylinder theory for shaft and hub
 in plane stress as used by DIN 7190-1:2017 for the elastic design, with the
 smoothing of roughness, the thermal change of the interference and the
 centrifugal loosening; the kernels are in :mod:`fitcheck.core.lame` and
-:mod:`fitcheck.core.pressfit`. Elastic-plastic design (DIN 7190-1, hub bore
-yielding) is not implemented: a joint whose hub or shaft would yield is
-reported as failing, with a :class:`~fitcheck.errors.MethodRangeWarning`.
+:mod:`fitcheck.core.pressfit`. With ``design = "elastic-plastic"`` the hub of
+ductile material may yield partly (DIN 7190-1:2017, :mod:`fitcheck.core.elastoplastic`):
+it passes while its plastic zone stays within ``plastic_zone_limit`` of the hub wall.
+In the elastic design (default) a joint whose hub or shaft would yield is reported as
+failing, with a :class:`~fitcheck.errors.MethodRangeWarning`; a yielding shaft fails in both.
 """
 
 from __future__ import annotations
@@ -34,6 +36,7 @@ import numpy as np
 from . import materials as _materials
 from . import tables
 from .checks import Check
+from .core import elastoplastic as _ep
 from .core import lame
 from .core import pressfit as _core
 from .errors import ErrorCollector, InputError, MethodRangeWarning, did_you_mean
@@ -80,6 +83,10 @@ KEYS: dict[str, str] = {
     "fracture_safety": "required safety of a brittle part (grey cast iron, plastic) against Rm with the "
                        "largest principal stress (default 2.0, common practice)",
     "press_force_limit": "force the press can give, e.g. '20 kN' (optional; checked for 'press' assembly)",
+    "design": "'elastic' (default: hub and shaft stay elastic) or 'elastic-plastic' (the hub of ductile "
+              "material may yield partly, DIN 7190-1:2017)",
+    "plastic_zone_limit": "elastic-plastic design: share of the hub wall thickness the plastic zone may "
+                          "reach, (D_pl − d)/(D_o − d) (default 0.3, from memory of DIN 7190-1:2017)",
 }
 
 #: (step of the method in words, standard clause or book equation) for the report.
@@ -108,7 +115,12 @@ METHOD_NOTES: list[tuple[str, str]] = [
      "DIN 7190-1:2017, longitudinal press fits"),
     ("Hub heating temperature T_0 + (δ_max + joining clearance − shaft cooling)/(α_h·d), "
      "against the material's heating limit", "DIN 7190-1:2017, transverse press fits"),
-    ("Not implemented: elastic-plastic design (hub bore yielding), end effects at the hub faces, "
+    ("Elastic-plastic design (design = 'elastic-plastic'): ideally elastic-plastic hub on an elastic "
+     "shaft, yield σt − σr = (2/√3)·Rp0.2; p = Rp0.2/√3·[1 − (D_pl/D_o)² + 2·ln(D_pl/d)], "
+     "δ/d = (2/√3)·Rp0.2/E_h·(D_pl/d)² + p·(K_shaft − (1 − ν_h)/E_h); states of smaller interference "
+     "unload elastically; plastic zone within plastic_zone_limit of the hub wall",
+     "DIN 7190-1:2017 (elastic-plastic range) — from memory; derived in fitcheck.core.elastoplastic"),
+    ("Not implemented: end effects at the hub faces, "
      "fretting fatigue of the shaft", "DIN 7190-1:2017 (elastic-plastic range)"),
 ]
 
@@ -118,6 +130,10 @@ REF_SHAFT = "DIN 7190-1:2017 (elastic design, shaft); von Mises, Shigley, 10th e
 REF_SPEED = "DIN 7190-1:2017 (centrifugal loosening); Shigley, 10th ed., eq. (3-55)"
 REF_HEAT = "DIN 7190-1:2017 (transverse press fits); heating limit of data/materials.csv"
 REF_PRESS = "DIN 7190-1:2017 (longitudinal press fits, press-in force)"
+
+DESIGNS = ("elastic", "elastic-plastic")
+REF_PLASTIC = ("DIN 7190-1:2017 (elastic-plastic hub, extent of the plastic zone) — from memory; "
+               "fitcheck.core.elastoplastic")
 
 DEFAULTS = {  # core units
     "shaft_bore": 0.0,
@@ -134,6 +150,8 @@ DEFAULTS = {  # core units
     "temperature_assembly": 20.0,
     "yield_safety": 1.2,      # common practice
     "fracture_safety": 2.0,   # common practice for brittle hubs
+    "design": "elastic",
+    "plastic_zone_limit": 0.3,  # from memory (DIN 7190-1:2017); the failing side of the choice
 }
 ASSEMBLIES = ("press", "shrink")
 MAX_SIZE = 10_000.0       # [mm] plausibility bound of diameters and lengths — common practice
@@ -268,6 +286,8 @@ class PressFitInput:
     yield_safety: float = DEFAULTS["yield_safety"]
     fracture_safety: float = DEFAULTS["fracture_safety"]
     press_force_limit: float | None = None   # [N]
+    design: str = "elastic"
+    plastic_zone_limit: float = DEFAULTS["plastic_zone_limit"]  # share of the hub wall [-]
 
     # ------------------------------------------------------------------ reading
     @classmethod
@@ -346,6 +366,8 @@ class PressFitInput:
         parse("yield_safety", lambda x, k: number(x, k, lo=1.0, hi=20.0))
         parse("fracture_safety", lambda x, k: number(x, k, lo=1.0, hi=20.0))
         parse("press_force_limit", lambda x, k: to_core(x, "force", k, lo=0.0, lo_open=True, hi=1e10))
+        parse("design", lambda x, k: _design(x, k))
+        parse("plastic_zone_limit", lambda x, k: number(x, k, lo=0.0, hi=1.0, lo_open=True))
 
         # ---- required keys and alternatives
         has_fit = "fit" in mapping
@@ -412,6 +434,10 @@ class PressFitInput:
             if jc is not None and jc > 0.02 * d:
                 errs.add(InputError(f"{field}.joining_clearance", g("joining_clearance"),
                                     f"at most 2 % of the diameter ({0.02 * d:g} mm)"))
+        hm = v.get("hub_material")
+        if v.get("design") == "elastic-plastic" and hm is not None and not hm.is_ductile:
+            errs.add(InputError(f"{field}.design", g("design"), "'elastic' for a brittle hub material "
+                                f"({hm.name}): the elastic-plastic design needs a ductile hub"))
         for k in ("rz_shaft", "rz_hub"):
             if k in v and v[k] > 0.2:
                 errs.add(InputError(f"{field}.{k}", g(k), "a roughness depth of at most 200 um",
@@ -460,6 +486,9 @@ class PressFitInput:
         out["fracture_safety"] = self.fracture_safety
         if self.press_force_limit is not None:
             out["press_force_limit"] = _fmt(self.press_force_limit, "N")
+        if self.design != "elastic" or self.plastic_zone_limit != DEFAULTS["plastic_zone_limit"]:
+            out["design"] = self.design
+            out["plastic_zone_limit"] = self.plastic_zone_limit
         return out
 
     # ------------------------------------------------------------------ derived
@@ -518,6 +547,13 @@ def _teeth(x, key):
     if not z.is_integer() or z < 6 or z > 10_000:
         raise InputError(key, x, "a whole number of teeth, 6 … 10000")
     return int(z)
+
+
+def _design(x, key):
+    s = str(x).strip().lower()
+    if s not in DESIGNS:
+        raise InputError(key, x, "'elastic' or 'elastic-plastic'", did_you_mean(s, DESIGNS))
+    return s
 
 
 def _assembly(x, key):
@@ -609,6 +645,10 @@ class PressFitResult:
     governing_tight_condition: str
     checks: tuple[Check, ...]
     warnings: tuple[str, ...] = ()
+    design: str = "elastic"
+    plastic_zone_diameter: float = math.nan  # [mm] at the tightest case; = diameter while elastic
+    plastic_utilisation: float = 0.0         # plastic share of the hub wall / permitted share [-]
+    plastic_zone_limit: float = DEFAULTS["plastic_zone_limit"]
 
     @property
     def ok(self) -> bool:
@@ -636,19 +676,30 @@ class PressFitResult:
         a, b = lame.rotating_disc_stresses(s.density, w, s.nu, di, d, rs)
         srs, sts = srs + a, sts + b
         srh, sth = lame.hub_stresses(case.pressure, d, Do, rh)
+        d_pl = self.plastic_zone_diameter if self.design == "elastic-plastic" else d
+        if d_pl > d:  # partly plastic hub (fitcheck.core.elastoplastic)
+            srh, sth = _ep.hub_stresses(self.pressure_max, d_pl, d, Do, rh, self.hub_material.Rp02)
         a, b = lame.rotating_disc_stresses(h.density, w, h.nu, d, Do, rh)
         srh, sth = srh + a, sth + b
         return {"r_shaft": rs, "sr_shaft": srs, "st_shaft": sts, "vm_shaft": lame.von_mises(srs, sts),
                 "r_hub": rh, "sr_hub": srh, "st_hub": sth, "vm_hub": lame.von_mises(srh, sth),
-                "condition": self.governing_tight_condition}
+                "condition": self.governing_tight_condition,
+                "plastic_zone_diameter": d_pl}
 
     def torque_capacity_at(self, interference) -> np.ndarray:
         """Torque capacity [N·mm] at operating condition for measured interferences [mm].
 
         Linear in the interference above the loss by smoothing, temperature and speed; 0 below.
+        In the elastic-plastic design the pressure follows the partly plastic hub (first loading).
         """
         lo = self.loosest_operating
         loss = lo.interference - lo.effective_interference
+        if self.design == "elastic-plastic":  # first loading of the partly plastic hub
+            s, h = self.shaft_material, self.hub_material
+            p = np.asarray(_ep.contact_pressure(np.asarray(interference, dtype=float) - loss, self.diameter,
+                                                self.shaft_bore, self.hub_outer_diameter, s.E, s.nu, h.E,
+                                                h.nu, h.Rp02))
+            return p * math.pi * self.diameter**2 * self.length * self.mu_slip / 2.0
         p_per_mm = _pressure_per_mm(self)
         p = np.maximum((np.asarray(interference, dtype=float) - loss) * p_per_mm, 0.0)
         return p * math.pi * self.diameter**2 * self.length * self.mu_slip / 2.0
@@ -715,6 +766,9 @@ class PressFitResult:
             "checks": [c.to_dict() for c in self.checks],
             "warnings": list(self.warnings),
             "ok": self.ok,
+            "design": self.design,
+            "plastic_zone_diameter_mm": self.plastic_zone_diameter,
+            "plastic_utilisation": self.plastic_utilisation,
         }
 
 
@@ -729,11 +783,16 @@ def _f(x) -> float:
     return float(np.asarray(x))
 
 
-def _case(label, delta, d, L, di, Do, s: Material, h: Material, mu, loss_rz, Ts, Th, T0, w) -> PressFitCase:
+def _case(label, delta, d, L, di, Do, s: Material, h: Material, mu, loss_rz, Ts, Th, T0, w,
+          p=None) -> PressFitCase:
     de = delta - loss_rz + lame.thermal_interference_change(d, s.alpha, h.alpha, Ts, Th, T0) \
         - lame.centrifugal_interference_loss(w, d, di, Do, s.E, s.nu, s.density, h.E, h.nu, h.density)
-    p = lame.contact_pressure(de, d, di, Do, s.E, s.nu, h.E, h.nu)
+    plastic_design = p is not None  # the elastic-plastic design passes the kernel's pressure
+    if p is None:
+        p = lame.contact_pressure(de, d, di, Do, s.E, s.nu, h.E, h.nu)
     hr, ht = lame.hub_stresses(p, d, Do, d / 2.0)
+    if plastic_design and p > _ep.elastic_limit_pressure(d, Do, h.Rp02):  # plastic hub bore
+        ht = _ep.KAPPA_DIN * h.Rp02 - p
     ht += lame.rotating_disc_stresses(h.density, w, h.nu, d, Do, d / 2.0)[1]
     sr, st = lame.shaft_stresses(p, d, di, d / 2.0)
     st += lame.rotating_disc_stresses(s.density, w, s.nu, di, d, d / 2.0)[1]
@@ -806,7 +865,8 @@ def core_arguments(inp: PressFitInput) -> tuple[dict, str, str]:
         Rms=s.Rm, Rmh=h.Rm, fracture_safety=inp.fracture_safety, shrink=inp.assembly == "shrink",
         max_heating=h.max_heating_C if not math.isnan(h.max_heating_C) else np.inf,
         T_shaft_cooled=inp.temperature_shaft_cooled if inp.temperature_shaft_cooled is not None else T0,
-        press_force_limit=inp.press_force_limit if inp.press_force_limit is not None else np.inf)
+        press_force_limit=inp.press_force_limit if inp.press_force_limit is not None else np.inf,
+        design=inp.design, plastic_limit=inp.plastic_zone_limit)
     return kwargs, "; ".join(src_parts), do_rule
 
 
@@ -829,11 +889,15 @@ def evaluate(inp: PressFitInput) -> PressFitResult:
 
     args = (d, inp.length, inp.shaft_bore, Do, s, h, mu_slip, loss_rz)
     Ts, Th = inp.temperature_shaft, inp.temperature_hub
+    ep = {k: r[k] for k in ("p_min_op", "p_max_op", "p_min_asm", "p_max_asm")} \
+        if inp.design == "elastic-plastic" else dict.fromkeys(("p_min_op", "p_max_op", "p_min_asm", "p_max_asm"))
     cases = {
-        "loosest_operating": _case("loosest, operating", imin, *args, Ts, Th, T0, w),
-        "tightest_operating": _case("tightest, operating", imax, *args, Ts, Th, T0, w),
-        "loosest_assembly": _case("loosest, room temperature, standstill", imin, *args, T0, T0, T0, 0.0),
-        "tightest_assembly": _case("tightest, room temperature, standstill", imax, *args, T0, T0, T0, 0.0),
+        "loosest_operating": _case("loosest, operating", imin, *args, Ts, Th, T0, w, ep["p_min_op"]),
+        "tightest_operating": _case("tightest, operating", imax, *args, Ts, Th, T0, w, ep["p_max_op"]),
+        "loosest_assembly": _case("loosest, room temperature, standstill", imin, *args, T0, T0, T0, 0.0,
+                                  ep["p_min_asm"]),
+        "tightest_assembly": _case("tightest, room temperature, standstill", imax, *args, T0, T0, T0, 0.0,
+                                   ep["p_max_asm"]),
     }
     tight_op = cases["tightest_operating"].hub_von_mises_bore >= cases["tightest_assembly"].hub_von_mises_bore
 
@@ -850,7 +914,8 @@ def evaluate(inp: PressFitInput) -> PressFitResult:
         Check("slip at loosest fit", r["slip_safety_min"] if r["p_min"] > 0 else 0.0, inp.slip_safety, ">=",
               "", REF_SLIP, load_note + ("" if r["p_min"] > 0 else "; no contact pressure (clearance)")),
         Check("hub yield at tightest fit", r["hub_yield_safety"], hub_req, ">=", "", REF_HUB,
-              f"safety {hub_basis} at the hub bore"),
+              f"safety {hub_basis} at the hub bore") if inp.design == "elastic" else
+        plastic_zone_check(r["plastic_zone_diameter_max"], d, Do, inp.plastic_zone_limit),
         Check("shaft yield at tightest fit", r["shaft_yield_safety"], shaft_req, ">=", "", REF_SHAFT,
               f"safety {shaft_basis}, shaft surface and bore/centre"),
         Check("loosening speed", r["loosening_speed"] * rpm if r["loosening_speed"] > 0 else math.nan,
@@ -872,13 +937,16 @@ def evaluate(inp: PressFitInput) -> PressFitResult:
                             REF_PRESS, "at the tightest fit, room temperature, with mu_press"))
 
     # ---- method range and material cautions
-    if r["hub_yield_safety"] < 1.0:
+    if brittle_h and inp.design == "elastic-plastic":
+        raise InputError(f"{label}.design", inp.design, f"'elastic' for the brittle hub material {h.name}")
+    if r["hub_yield_safety"] < 1.0 and inp.design == "elastic":
         warns.append(f"the hub bore exceeds its {'tensile strength' if brittle_h else 'yield strength'} at the "
-                     "tightest fit: the elastic Lamé result no longer holds; elastic-plastic design per "
-                     "DIN 7190-1:2017 is not implemented in fitcheck")
+                     "tightest fit: the elastic Lamé result no longer holds"
+                     + ("" if brittle_h else "; design = 'elastic-plastic' designs a partly yielding hub "
+                        "(DIN 7190-1:2017)"))
     if r["shaft_yield_safety"] < 1.0:
         warns.append("the shaft exceeds its yield strength at the tightest fit: the elastic result no longer "
-                     "holds (DIN 7190-1:2017 elastic-plastic range not implemented)")
+                     "holds; the shaft must stay elastic in both designs (DIN 7190-1:2017)")
     for m, part in ((s, "shaft"), (h, "hub")):
         if m.group == "plastic":
             warns.append(f"{part} material {m.name} creeps: {m.note or 'long-term pressure is lower'}")
@@ -909,4 +977,27 @@ def evaluate(inp: PressFitInput) -> PressFitResult:
         joining_clearance=jc, loosening_speed=r["loosening_speed"],
         governing_tight_condition="operating" if tight_op else "assembly",
         checks=tuple(checks), warnings=tuple(warns),
+        design=inp.design, plastic_zone_diameter=r["plastic_zone_diameter_max"],
+        plastic_utilisation=r["plastic_utilisation"], plastic_zone_limit=inp.plastic_zone_limit,
     )
+
+
+def plastic_zone_check(d_pl: float, d: float, Do: float, limit: float) -> Check:
+    """The elastic-plastic design's hub check: share of the hub wall that yields at the tightest fit.
+
+    Passes while (D_pl − d)/(Do − d) ≤ ``limit``; the note states the depth of the zone and, beyond
+    the limit, by how much it is exceeded.
+    """
+    share = float(_ep.plastic_share(d_pl, d, Do))
+    depth = (d_pl - d) / 2.0
+    allowed = limit * (Do - d) / 2.0
+    if d_pl <= d:
+        note = "the hub stays elastic (no plastic zone)"
+    else:
+        note = (f"plastic zone Ø {d_pl:.3f} mm: {depth:.3f} mm deep from the bore, "
+                f"{share:.0%} of the hub wall; permitted {allowed:.3f} mm ({limit:.0%})")
+        if share > limit:
+            note += f"; exceeded by {depth - allowed:.3f} mm"
+        if d_pl >= Do:
+            note += "; the hub is fully plastic"
+    return Check("hub plastic zone at tightest fit", share, limit, "<=", "", REF_PLASTIC, note)

@@ -40,7 +40,15 @@ from . import CAUTION, fits
 from .checks import Check
 from .core import pressfit as _core
 from .errors import InputError
-from .pressfit import REF_HEAT, REF_HUB, REF_PRESS, REF_SHAFT, REF_SLIP, REF_SPEED
+from .pressfit import (
+    REF_HEAT,
+    REF_HUB,
+    REF_PRESS,
+    REF_SHAFT,
+    REF_SLIP,
+    REF_SPEED,
+    plastic_zone_check,
+)
 
 __all__ = ["BearingSearchResult", "Candidate", "SearchResult", "SeatCandidate", "candidates",
            "search_bearing_seat", "search_fits"]
@@ -242,7 +250,9 @@ def _checks_for(i: int, r: dict, a: dict, shrink: bool, press_limit_given: bool)
     out = [
         Check(CHECK_NAMES[0], float(r["slip_safety_min"][i]) if p_min > 0 else 0.0, a["slip_safety"],
               ">=", "", REF_SLIP, "" if p_min > 0 else "no contact pressure (clearance)"),
-        Check(CHECK_NAMES[1], float(r["hub_yield_safety"][i]), hub_req, ">=", "", REF_HUB),
+        Check(CHECK_NAMES[1], float(r["hub_yield_safety"][i]), hub_req, ">=", "", REF_HUB)
+        if a.get("design", "elastic") == "elastic" else  # elastic-plastic design: the hub's plastic zone
+        plastic_zone_check(float(r["plastic_zone_diameter_max"][i]), a["d"], a["Do"], a["plastic_limit"]),
         Check(CHECK_NAMES[2], float(r["shaft_yield_safety"][i]), shaft_req, ">=", "", REF_SHAFT),
         Check(CHECK_NAMES[3], float(r["loosening_speed"][i]) / RPM, a["omega"] / RPM, ">=", "rpm",
               REF_SPEED),
@@ -345,7 +355,8 @@ def search_fits(joint, *, holes=DEFAULT_HOLES, shaft_grades=DEFAULT_SHAFT_GRADES
     hub_req = a["fracture_safety"] if a["brittle_hub"] else a["yield_safety"]
     shaft_req = a["fracture_safety"] if a["brittle_shaft"] else a["yield_safety"]
     slip_v = np.where(r["p_min"] > 0, r["slip_safety_min"], 0.0)
-    ok = (slip_v >= a["slip_safety"]) & (r["hub_yield_safety"] >= hub_req) & \
+    hub_ok = r["ok_hub"] if a.get("design") == "elastic-plastic" else r["hub_yield_safety"] >= hub_req
+    ok = (slip_v >= a["slip_safety"]) & hub_ok & \
         (r["shaft_yield_safety"] >= shaft_req) & (r["loosening_speed"] / RPM >= a["omega"] / RPM)
     if shrink and math.isfinite(a["max_heating"]):
         ok &= r["shrink_temperature"] <= a["max_heating"]

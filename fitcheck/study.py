@@ -384,6 +384,8 @@ class _Model:
         """
         de = np.minimum(r["delta_eff_min_op"], r["delta_eff_min_asm"])
         p_lin = self.c_p * de
+        if self.args.get("design") == "elastic-plastic":  # the partly plastic hub's pressure
+            p_lin = np.where(de > 0.0, r["p_min"], p_lin)
         if self.demand > 0:
             a = self.args
             return p_lin * (math.pi * a["d"] * a["L"]) * x["mu_slip"] / self.demand - 1.0
@@ -394,7 +396,9 @@ class _Model:
         a = self.args
         hub_strength = a["Rmh"] if a["brittle_hub"] else a["Rph"]
         shaft_strength = a["Rms"] if a["brittle_shaft"] else a["Rps"]
-        return 1.0 - np.maximum(r["hub_stress_max"] / hub_strength, r["shaft_stress_max"] / shaft_strength)
+        hub = r["hub_stress_max"] / hub_strength if a.get("design", "elastic") == "elastic" else \
+            r["plastic_utilisation"] * a["plastic_limit"]  # elastic-plastic: fully plastic hub = 1
+        return 1.0 - np.maximum(hub, r["shaft_stress_max"] / shaft_strength)
 
     def reachable(self, mode: str) -> float | None:
         """Smallest limit-state value over the corners of the input box, or None when an input
@@ -796,7 +800,8 @@ def _design_ok(r: dict, a: dict):
     ok = (np.where(r["p_min"] > 0, r["slip_safety_min"], 0.0) >= a["slip_safety"])
     hub_req = a["fracture_safety"] if a["brittle_hub"] else a["yield_safety"]
     shaft_req = a["fracture_safety"] if a["brittle_shaft"] else a["yield_safety"]
-    ok = ok & (r["hub_yield_safety"] >= hub_req) & (r["shaft_yield_safety"] >= shaft_req)
+    hub_ok = r["ok_hub"] if a.get("design") == "elastic-plastic" else r["hub_yield_safety"] >= hub_req
+    ok = ok & hub_ok & (r["shaft_yield_safety"] >= shaft_req)
     ok = ok & (r["loosening_speed"] >= a["omega"])
     if a["shrink"]:
         ok = ok & (r["shrink_temperature"] <= a["max_heating"])

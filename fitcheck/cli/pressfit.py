@@ -94,7 +94,10 @@ def _print_joint(r, out) -> None:
         ["hub temperature for shrinking" + ("" if r.assembly == "shrink" else " (if shrunk instead)"),
          _g(r.shrink_temperature_C), "degC"],
         ["loosening speed (loosest)", _g(r.loosening_speed_rpm), "rpm"],
-    ], out)
+    ] + ([["hub plastic zone Ø (tightest; depth " + _g((r.plastic_zone_diameter - r.diameter) / 2.0)
+           + " mm)", _g(r.plastic_zone_diameter), "mm"],
+          ["plastic utilisation (share of wall / permitted)", _g(r.plastic_utilisation), ""]]
+         if getattr(r, "design", "elastic") == "elastic-plastic" else []), out)
     out.write("\n")
     rows = [[c.name, f"{_g(c.value)} {c.unit}".strip(), f"{c.sense} {_g(c.limit)} {c.unit}".strip(),
              "pass" if c.passed else "FAIL", c.reference] for c in r.checks]

@@ -47,6 +47,10 @@ max_heating, T_shaft_cooled
     temperature of a cooled shaft at joining [°C] (``None`` = ``T_assembly``).
 press_force_limit
     Force the press can give [N] (``np.inf`` = no limit).
+design, plastic_limit
+    ``"elastic"`` (default) or ``"elastic-plastic"``: the hub of ductile material may yield
+    partly (:mod:`fitcheck.core.elastoplastic`, DIN 7190-1:2017); its plastic zone may reach
+    ``plastic_limit`` (share of the hub wall thickness, default 0.3) [-].
 
 Returned keys (arrays broadcast to the common shape; stresses [MPa], forces [N],
 torques [N·mm], temperatures [°C], speeds [rad/s], interferences [mm])
@@ -66,7 +70,10 @@ torques [N·mm], temperatures [°C], speeds [rad/s], interferences [mm])
     diametral changes at ``p_max_asm``;
 ``press_force_max``, ``shrink_temperature``, ``loosening_speed``;
 ``ok_slip``, ``ok_hub``, ``ok_shaft``, ``ok_speed``, ``ok_heating``, ``ok_press``, ``ok``
-    check booleans.
+    check booleans (elastic-plastic design: ``ok_hub`` = plastic zone within its limit);
+``plastic_zone_diameter_max``, ``plastic_utilisation``
+    diameter of the hub's plastic zone at the tightest case [mm] (= d while elastic) and its
+    share of the hub wall divided by the permitted share [-] (0 in the elastic design).
 
 References
 ----------
@@ -78,6 +85,8 @@ T = (π/2)·f·p·l·d²).
 from __future__ import annotations
 
 import numpy as np
+
+from . import elastoplastic as _ep
 
 __all__ = ["evaluate", "OUTPUT_KEYS"]
 
@@ -92,6 +101,7 @@ OUTPUT_KEYS = (
     "hub_outer_growth_max", "shaft_bore_change_max",
     "press_force_max", "shrink_temperature", "loosening_speed",
     "ok_slip", "ok_hub", "ok_shaft", "ok_speed", "ok_heating", "ok_press", "ok",
+    "plastic_zone_diameter_max", "plastic_utilisation",
 )
 
 
@@ -110,7 +120,7 @@ def evaluate(*, interference_min, interference_max=None, d, L, di=0.0, Do,
              T_shaft=20.0, T_hub=20.0, T_assembly=20.0, joining_clearance=None,
              yield_safety=1.2, brittle_shaft=False, brittle_hub=False, Rms=np.inf, Rmh=np.inf,
              fracture_safety=2.0, shrink=False, max_heating=np.inf, T_shaft_cooled=None,
-             press_force_limit=np.inf) -> dict:
+             press_force_limit=np.inf, design="elastic", plastic_limit=0.3) -> dict:
     r"""Evaluate press or shrink fits: pressures, capacities, stresses, safeties, assembly and checks.
 
     See the module docstring for every argument and returned key with its unit.
@@ -170,7 +180,8 @@ def _block(*, interference_min, interference_max, d, L, di, Do, Es, nus, alphas,
            Eh, nuh, alphah, Rph, rhoh, mu_slip, mu_press, rz_shaft, rz_hub, smoothing,
            torque, axial_force, slip_safety, omega, T_shaft, T_hub, T_assembly,
            joining_clearance, yield_safety, brittle_shaft, brittle_hub, Rms, Rmh,
-           fracture_safety, shrink, max_heating, T_shaft_cooled, press_force_limit) -> dict:
+           fracture_safety, shrink, max_heating, T_shaft_cooled, press_force_limit,
+           design="elastic", plastic_limit=0.3) -> dict:
     """One block of :func:`evaluate`: every argument given (evaluate holds the defaults)."""
     f64 = np.float64
     dmin = np.asarray(interference_min, dtype=f64)
@@ -221,10 +232,16 @@ def _block(*, interference_min, interference_max, d, L, di, Do, Es, nus, alphas,
     de_min_op = de_min_th - d_w
     de_max_op = de_max_asm + d_op
 
-    p_min_asm = np.maximum(de_min_asm * c_p, 0.0)
-    p_max_asm = np.maximum(de_max_asm * c_p, 0.0)
-    p_min_op = np.maximum(de_min_op * c_p, 0.0)
-    p_max_op = np.maximum(de_max_op * c_p, 0.0)
+    if design == "elastic-plastic":  # partly plastic hub, DIN 7190-1:2017 (core/elastoplastic.py)
+        ep_args = (d, di, Do, Es, nus, Eh, nuh, Rph)
+        _f, p_min_asm, p_min_op, _z = _ep.state_pressures(de_min_asm, de_min_op, *ep_args, first=False)
+        p_max_asm, _a, p_max_op, d_pl = _ep.state_pressures(de_max_asm, de_max_op, *ep_args)
+    else:
+        p_min_asm = np.maximum(de_min_asm * c_p, 0.0)
+        p_max_asm = np.maximum(de_max_asm * c_p, 0.0)
+        p_min_op = np.maximum(de_min_op * c_p, 0.0)
+        p_max_op = np.maximum(de_max_op * c_p, 0.0)
+        d_pl = d
     p_min = np.minimum(p_min_op, p_min_asm)
     p_max = np.maximum(p_max_op, p_max_asm)
 
@@ -246,12 +263,19 @@ def _block(*, interference_min, interference_max, d, L, di, Do, Es, nus, alphas,
     sr_op = -p_max_op
     st_op = p_max_op * th + rot_hub_bore
     st_asm = p_max_asm * th
+    if design == "elastic-plastic":  # plastic bore: sigma_t = sigma_r + k (rotation superposed)
+        k_h = _ep.KAPPA_DIN * Rph
+        th_ep = lambda p: np.where(p > _ep.elastic_limit_pressure(d, Do, Rph), k_h - p, p * th)  # noqa: E731
+        st_op = th_ep(p_max_op) + rot_hub_bore
+        st_asm = th_ep(p_max_asm)
     if np.any(brittle_hub):
         hub_eq_asm = np.where(brittle_hub, st_asm, p_max_asm * np.sqrt(1.0 + th + th * th))
         hub_eq_op = np.where(brittle_hub, st_op, np.sqrt(sr_op * sr_op + st_op * st_op - sr_op * st_op))
     else:
         hub_eq_asm = p_max_asm * np.sqrt(1.0 + th + th * th)
         hub_eq_op = np.sqrt(sr_op * sr_op + st_op * st_op - sr_op * st_op)
+    if design == "elastic-plastic":
+        hub_eq_asm = np.where(brittle_hub, st_asm, np.sqrt(p_max_asm**2 + st_asm**2 + p_max_asm * st_asm))
     use_op = hub_eq_op >= hub_eq_asm
     hub_eq = np.where(use_op, hub_eq_op, hub_eq_asm)
     hub_sr = np.where(use_op, sr_op, -p_max_asm)
@@ -282,15 +306,28 @@ def _block(*, interference_min, interference_max, d, L, di, Do, Es, nus, alphas,
     # ---- deformations, assembly, loosening ------------------------------------------------------
     hub_growth = 2.0 * p_max_asm * d * qa / (Eh * (1.0 - qa2))
     bore_change = -2.0 * p_max_asm * di / (Es * (1.0 - qi2))
+    if design == "elastic-plastic":  # yielded hub: outer ring at yield, sigma_t(Do) = k·(D_pl/Do)²
+        hub_growth = np.where((d_pl > d) & (p_max_asm >= p_max),
+                              _ep.KAPPA_DIN * Rph * d_pl * d_pl / (Do * Eh), hub_growth)
     f_press = p_max_asm * (np.pi * d * L * mu_press)
     cool = alphas * d * (np.asarray(T_assembly, dtype=f64) - T_shaft_cooled)
     t_shrink = T_assembly + (dmax + joining_clearance - cool) / (alphah * d)
     with np.errstate(divide="ignore", invalid="ignore"):
         w_loose = np.sqrt(np.maximum(de_min_th, 0.0) / c_rot)
     w_loose = np.where(c_rot > 0.0, w_loose, np.where(de_min_th > 0.0, np.inf, 0.0))
+    if design == "elastic-plastic":  # a yielded bore unloads elastically: contact ends at its set
+        de_free = de_min_th - np.maximum(de_min_asm - p_min_asm / c_p, 0.0)
+        with np.errstate(divide="ignore", invalid="ignore"):
+            w_loose = np.where(c_rot > 0.0, np.sqrt(np.maximum(de_free, 0.0) / c_rot),
+                               np.where(de_free > 0.0, np.inf, 0.0))
 
     ok_slip = (s_slip >= slip_safety) & (p_min > 0.0)
     ok_hub = s_hub >= hub_req
+    if design == "elastic-plastic":
+        util = _ep.plastic_share(d_pl, d, Do) / plastic_limit
+        ok_hub = np.where(brittle_hub, ok_hub, util <= 1.0)
+    else:
+        util = np.zeros_like(s_hub)
     ok_shaft = s_shaft >= shaft_req
     ok_speed = w_loose > np.sqrt(w2)
     ok_heating = np.logical_not(shrink) | (t_shrink <= max_heating)
@@ -311,5 +348,6 @@ def _block(*, interference_min, interference_max, d, L, di, Do, Es, nus, alphas,
         "press_force_max": f_press, "shrink_temperature": t_shrink, "loosening_speed": w_loose,
         "ok_slip": ok_slip, "ok_hub": ok_hub, "ok_shaft": ok_shaft, "ok_speed": ok_speed,
         "ok_heating": ok_heating, "ok_press": ok_press, "ok": ok,
+        "plastic_zone_diameter_max": d_pl + 0.0 * p_max, "plastic_utilisation": util,
     }
     return out

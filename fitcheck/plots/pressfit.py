@@ -23,6 +23,7 @@ def plot_wall_stresses(result, ax=None, *, units: str = "SI") -> Figure:
 
     The governing condition (room temperature at standstill, or operating with
     temperature and centrifugal stresses) is the one with the larger stress at the hub bore.
+    In the elastic-plastic design the hub's plastic zone is shaded.
     """
     fig, ax = _axes(ax)
     prof = result.wall_profile()
@@ -38,6 +39,10 @@ def plot_wall_stresses(result, ax=None, *, units: str = "SI") -> Figure:
         ax.plot(r, prof[f"vm_{part}"], "--", color="tab:red",
                 **({"label": "von Mises σv"} if part == "shaft" else kw))
     ax.axvline(result.diameter / 2.0 * kr, color="0.4", lw=0.8)
+    d_pl = prof.get("plastic_zone_diameter", result.diameter)
+    if d_pl > result.diameter:  # elastic-plastic design: the yielded ring of the hub
+        ax.axvspan(result.diameter / 2.0 * kr, d_pl / 2.0 * kr, color="tab:red", alpha=0.12, lw=0,
+                   label=f"plastic zone to Ø {d_pl * kr:.4g} {lr} ({(d_pl - result.diameter) / 2.0 * kr:.3g} {lr} deep)")
     ax.axhline(0.0, color="0.6", lw=0.6)
     h, s = result.hub_material, result.shaft_material
     ax.axhline(h.Rp02 * ks, color="tab:red", lw=0.6, ls=":", label=f"Rp0.2 hub ({h.name})")

@@ -13,7 +13,7 @@ import streamlit as st
 
 from fitcheck import checks, fits, pressfit
 from fitcheck.errors import InputError
-from fitcheck.ui import app, charts, joints, state, unitsys, widgets
+from fitcheck.ui import app, charts, joints, pressfit_design, state, unitsys, widgets
 from fitcheck.ui.joints import Field
 
 TABLE, PREFIX = "pressfit", "pf"
@@ -32,6 +32,7 @@ def fields() -> list[tuple[str, list[Field]]]:
         ("Assembly", [Field("assembly", "Assembly", ("press", "shrink")),
                       "press_force_limit", "temperature_shaft_cooled", "joining_clearance"]),
         ("Required safeties", ["slip_safety", "yield_safety", "fracture_safety"]),
+        pressfit_design.design_group(),
     ])
 
 
@@ -134,6 +135,7 @@ def _summary(r: pressfit.PressFitResult, system: str, name: str) -> None:
     c[1].metric("Hub heating temperature", unitsys.show_in(r.shrink_temperature_C, "degC", system),
                 help=f"shrinking on: hub temperature for the tightest fit plus the joining "
                 f"clearance ({used})")
+    pressfit_design.show_plastic_zone(r, system)
     _capacity_chart(r, system, name)
 
 
