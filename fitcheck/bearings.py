@@ -990,29 +990,48 @@ def evaluate(inp: BearingSeatInput) -> BearingSeatResult:
                 red_op[1], float(g0[0]), (shaft_cls, float(zs.upper_um), float(bore_dev[1])),
                 (housing_cls, float(zh.lower_um)) if np.asarray(contr_o)[4] > 0 else None,
                 b.d, red_op[1] - float(_clearance_min_below(b.d, smallest_wc)) if smallest_wc else None))
-    hoop_max = float(np.max(hoop_i))
+    # the other temperature states (lowest / highest ambient): grip of the loosest and stress of the
+    # tightest pairing, state by state; (name, thermal change inner, outer) [µm]
+    dts = [(st_[0], 1000.0 * core.thermal_interference_change(b.d, m_s.alpha, st_[3], ring.alpha, st_[1], ta),
+            1000.0 * core.thermal_interference_change(b.D, ring.alpha, st_[2], m_h.alpha, st_[4], ta))
+           for st_ in states]
+    hoop_max, hoop_state = float(np.max(hoop_i)), "operating"
+    hoop_h_max = float(np.max(hoop_h))
+    for name_, dt_i, dt_o in dts:
+        hi_ = float(np.asarray(core.inner_ring_fit((ui_eff[1] + dt_i) / 1000.0, b.d, di, d_ie, m_s.E, m_s.nu,
+                                                   ring.E, ring.nu)[2]))
+        if hi_ > hoop_max:
+            hoop_max, hoop_state = hi_, name_
+        po_ = core.outer_ring_fit((uo_eff[1] + dt_o) / 1000.0, b.D, D_oe, Dh, ring.E, ring.nu, m_h.E, m_h.nu)[0]
+        hoop_h_max = max(hoop_h_max, float(np.asarray(hub_stresses(po_, b.D, Dh, b.D / 2.0)[1])))
     checks.append(Check("hoop stress at the inner-ring bore", hoop_max, inp.hoop_stress_limit, "<=",
                         "MPa", "Lamé, Shigley eq. (3-58); limit: common practice for through-hardened rings "
-                        "(about 25 ksi)"))
-    hoop_h_max = float(np.max(hoop_h))
+                        "(about 25 ksi)", f"tightest pairing; governing state: {hoop_state}"))
     if hoop_h_max > 0 and math.isfinite(m_h.Rp02):
         checks.append(Check("hoop stress at the housing bore", hoop_h_max, m_h.Rp02, "<=", "MPa",
                             "Lamé, Shigley eq. (3-58); limit: yield strength Rp0.2 of the housing"))
     rotating = ("inner ring on shaft", ui_eff, ui_op, s_i) if inp.load == "rotating_inner" \
         else ("outer ring in housing", uo_eff, uo_op, s_o)
+    # the loosest state of the ring under circumferential load (operating, or a colder / hotter ambient)
+    k_rot = 1 if inp.load == "rotating_inner" else 2
+    grip_state, grip_dt = "operating", float(rotating[2][0] - rotating[1][0])
+    for x in dts:
+        if x[k_rot] < grip_dt - 1e-12:
+            grip_state, grip_dt = x[0], x[k_rot]
+    rotating = (rotating[0], rotating[1], np.asarray(rotating[1]) + grip_dt, rotating[3])
     if rotating[1][0] > 0:
         checks.append(Check(
             f"rotating-load ring keeps its grip at operating temperature ({rotating[0]})",
             float(rotating[2][0]), 0.0, ">=", "um", "DIN 7190-1:2017, 6.4 (thermal change of interference)",
             "loosest pairing, effective interference after smoothing; a ring under circumferential load "
-            "that loses its interference creeps"))
+            f"that loses its interference creeps; governing state: {grip_state}"))
     else:
         # the loosest pairing has no grip: hold at least the mid-tolerance pairing to an interference
         checks.append(Check(
             f"rotating-load ring is an interference fit at mid-tolerance ({rotating[0]})",
             float(rotating[2][2]), 0.0, ">=", "um",
             "DIN 5425-1 (ring under circumferential load: interference fit); DIN 7190-1:2017, 6.2, 6.4",
-            "every part at the middle of its tolerance, after smoothing, at operating temperature"))
+            f"every part at the middle of its tolerance, after smoothing; governing state: {grip_state}"))
         notes.append(f"the loosest pairing of the {rotating[0]} seat has no interference left after "
                      f"smoothing ({float(rotating[2][0]):.1f} um at operating temperature, smoothing "
                      f"{float(rotating[3]):.1f} um); at mid-tolerance it is {float(rotating[2][2]):.1f} um. "
