@@ -256,3 +256,21 @@ def test_kernel_state_codes_and_old_keys():
     # (code 5 = T_min at speed) is loosest where T_min = -20 °C; else the cold start (code 1)
     assert list(out["state_p_min"]) == [1, 1]  # equal α: a uniform temperature leaves δ unchanged
     assert out["p_min_asm"][0] > out["p_min"][0]
+
+
+def test_report_shows_governing_state_and_clearance_verdict():
+    """The report takes checks and their notes generically: the governing state and the bearing's
+    clearance verdict by probable combination reach it."""
+    from fitcheck import report
+
+    text = ('format_version = 1\n[conditions]\ntemperature_min = "-10 degC"\n\n'
+            '[[pressfit]]\nname = "gear"\nfit = "20 H7/s6"\nlength = "16 mm"\nhub_outer_diameter = "40 mm"\n'
+            'shaft_material = "C45E"\nhub_material = "C45E"\ntorque = "10 N*m"\nspeed = "20000 rpm"\n'
+            'temperature_shaft = "80 degC"\ntemperature_hub = "40 degC"\n\n'
+            '[[bearing]]\nname = "b"\ndesignation = "6204"\nshaft = "k5"\nhousing = "H7"\n')
+    dc = case_mod.loads(text)
+    with warnings.catch_warnings():
+        warnings.simplefilter("ignore", MethodRangeWarning)
+        html = report.to_html(case_mod.evaluate(dc))
+    assert "cold start at 20" in html
+    assert "mean, probable combination" in html and "maximum probable interference" in html

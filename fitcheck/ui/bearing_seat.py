@@ -15,7 +15,7 @@ import streamlit as st
 
 from fitcheck import bearings, checks
 from fitcheck.errors import InputError
-from fitcheck.ui import app, charts, joints, state, unitsys, widgets
+from fitcheck.ui import app, charts, joints, state, unitsys, verdicts, widgets
 from fitcheck.ui.joints import Field
 
 TABLE, PREFIX = "bearing", "br"
@@ -102,6 +102,7 @@ def _results(r: bearings.BearingSeatResult, system: str, name: str) -> None:
     widgets.verdict_banner(r.ok, checks.worst(r.checks),
                            system)
     st.subheader(f"{r.designation}: shaft {r.shaft_class}, housing {r.housing_class}")
+    verdicts.bearing_clearance(r, system)
     c = st.columns(2)
     c[0].metric("Operating clearance", unitsys.show_range(r.operating_clearance_um, "small_length",
                                                           system, digits=3),

@@ -13,7 +13,7 @@ import streamlit as st
 
 from fitcheck import checks, fits, pressfit
 from fitcheck.errors import InputError
-from fitcheck.ui import app, charts, joints, state, unitsys, widgets
+from fitcheck.ui import app, charts, joints, state, unitsys, verdicts, widgets
 from fitcheck.ui.joints import Field
 
 TABLE, PREFIX = "pressfit", "pf"
@@ -102,6 +102,7 @@ def render() -> None:
 def _summary(r: pressfit.PressFitResult, system: str, name: str) -> None:
     widgets.verdict_banner(r.ok, checks.worst(r.checks),
                            system)
+    verdicts.pressfit_states(r)
     st.subheader(f"{r.name or 'Joint'}: {r.fit or 'given interference'}, "
                  f"Ø {unitsys.show(r.diameter, 'length', system)} × "
                  f"{unitsys.show(r.length, 'length', system)}")
