@@ -1097,9 +1097,10 @@ def _headline(checks, r, state_lo, state_tight, state_shaft, state_loose, why_ze
     c = by["slip at loosest fit"]
     if not c.passed:
         if r["p_min"] <= 0:
-            out.append(f"Slips: no contact pressure at the loosest fit ({state_lo}): {why_zero}. Next: a "
-                       "tighter fit (fitcheck search lists the fits that pass) or a material pair that "
-                       "keeps its interference when warm")
+            nxt = ("an interference fit" if "is a clearance" in why_zero else
+                   "a tighter fit, or a material pair that keeps its interference in that state")
+            out.append(f"Slips: no contact pressure at the loosest fit ({state_lo}): {why_zero}. Next: "
+                       f"{nxt} (fitcheck search lists the fits that pass)")
         else:
             out.append(f"Slips: slip safety {c.value:.3g} < {c.limit:g} at the loosest fit ({state_lo}). "
                        "Next: a tighter fit, a longer hub or a rougher, dry joint (fitcheck search)")
