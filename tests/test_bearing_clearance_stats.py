@@ -10,6 +10,8 @@ import warnings
 
 import numpy as np
 import pytest
+from hypothesis import given, settings
+from hypothesis import strategies as st
 
 from fitcheck import bearings
 from fitcheck.core import clearance_stats as cs
@@ -129,7 +131,7 @@ def test_distribution_agrees_with_monte_carlo(dt_outer, distribution):
     tol = dict(group=(5, 20), bore=(-10, 0), shaft=(2, 11), od=(-11, 0), hous=(0, 25))
     r = cs.probable_clearance(tol["group"], tol["bore"], tol["shaft"], tol["od"], tol["hous"], **kw,
                               required_um=0.0, distribution=distribution)
-    n = 400_000
+    n = 200_000
     g = _monte_carlo(**tol, kw=kw, n=n, seed=11, distribution=distribution)
     se = g.std() / math.sqrt(n)
     assert r["distribution_mean"] == pytest.approx(g.mean(), abs=5 * se + 0.01)
@@ -156,3 +158,25 @@ def test_conditions_temperature_min_reaches_bearing_seats(tmp_path):
                  'name = "b"\ndesignation = "6204"\nshaft = "k5"\nhousing = "H7"\nhousing_material = "EN AW-6082-T6"\n')
     dc = case_mod.load(p)
     assert dc.bearings[0].temperature_min == -10.0
+
+
+@settings(max_examples=8, deadline=None)
+@given(t_bore=st.floats(5, 20), t_shaft=st.floats(5, 25), up_shaft=st.floats(-10, 30),
+       t_od=st.floats(5, 20), t_hous=st.floats(10, 40), lo_hous=st.floats(-30, 10),
+       dt_o=st.floats(-10, 25), dt_i=st.floats(-10, 10), distribution=st.sampled_from(["normal", "uniform"]),
+       seed=st.integers(0, 2**31))
+def test_distribution_agrees_with_monte_carlo_property(t_bore, t_shaft, up_shaft, t_od, t_hous, lo_hous,
+                                                       dt_o, dt_i, distribution, seed):
+    """Quantile integration against a Monte Carlo of the same marginals (lot-study engine), any bands."""
+    kw = dict(s_inner=3.28, s_outer=6.32, dt_inner=dt_i, dt_outer=dt_o, k_inner=0.75, k_outer=0.55)
+    tol = dict(group=(5, 20), bore=(-t_bore, 0), shaft=(up_shaft - t_shaft, up_shaft), od=(-t_od, 0),
+               hous=(lo_hous, lo_hous + t_hous))
+    r = cs.probable_clearance(tol["group"], tol["bore"], tol["shaft"], tol["od"], tol["hous"], **kw,
+                              distribution=distribution)
+    n = 100_000
+    g = _monte_carlo(**tol, kw=kw, n=n, seed=seed, distribution=distribution)
+    se = g.std() / math.sqrt(n)
+    assert r["distribution_mean"] == pytest.approx(g.mean(), abs=5 * se + 0.02)
+    assert r["sigma"] == pytest.approx(g.std(), rel=0.015, abs=0.02)
+    lo, hi = rel.clopper_pearson(int((g < 0).sum()), n, 0.999)
+    assert lo - 2e-3 <= r["p_below"] <= hi + 2e-3
