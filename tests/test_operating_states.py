@@ -274,3 +274,15 @@ def test_report_shows_governing_state_and_clearance_verdict():
         html = report.to_html(case_mod.evaluate(dc))
     assert "cold start at 20" in html
     assert "mean, probable combination" in html and "maximum probable interference" in html
+
+
+def test_gasket_expansion_reads_per_degree():
+    """The gasket's expansion coefficient (VDI 2230 thermal preload change) takes 1/degC and 1/degF
+    as per degree, like every other coefficient."""
+    from fitcheck import screws
+    from tests.test_screws import BASE
+
+    vals = [screws.ScrewJointInput.from_mapping({**BASE, "gasket_thickness": "0.5 mm",
+                                                 "gasket_modulus": "300 MPa", "gasket_alpha": a}).gasket.alpha
+            for a in ("60e-6 1/K", "60e-6 1/degC", f"{60e-6 * 5 / 9!r} 1/degF")]
+    assert vals == pytest.approx([60e-6] * 3, rel=1e-12)
