@@ -43,6 +43,7 @@ import numpy as np
 from . import materials, tables
 from .checks import Check, all_passed
 from .core import bearing as core
+from .core import clearance_stats as stats
 from .errors import ErrorCollector, InputError, MethodRangeWarning, did_you_mean
 from .materials import Material
 from .units import number, temperature_c, to_core
@@ -112,6 +113,12 @@ KEYS: dict[str, str] = {
     "friction": "coefficient of friction of both seats for axial slip [-] (default per seat: "
                 "data/pressfit_friction.csv, longitudinal press fit, oiled; steel 0.08, aluminium 0.05)",
     "hoop_stress_limit": "permissible hoop stress at the inner-ring bore [stress] (default 175 MPa)",
+    "temperature_min": "lowest ambient temperature, all parts at it [temperature] (optional; also read from "
+                       "[conditions]): a cold light-alloy housing tightens the outer ring",
+    "temperature_max": "highest ambient temperature, all parts at it [temperature] (optional; also read "
+                       "from [conditions])",
+    "clearance_distribution": "how each tolerance band is spread in the probable clearance: 'normal' "
+                              "(±3σ = band, default) or 'uniform'",
 }
 
 #: The method step by step, with the clause it follows (printed in reports).
@@ -134,9 +141,15 @@ METHOD_NOTES: list[tuple[str, str]] = [
      "Shigley 10th ed., eqs. (3-50), (3-56); equivalent ring and stress limit: common practice"),
     ("Clearance loss from the inner ring running warmer than the outer ring, alpha*(ti - to)*dm",
      "common practice (bearing-trade handbooks)"),
-    ("Operating clearance = initial clearance (ISO 5753-1 group) - fit-up - thermal, min and max "
-     "(arithmetic worst case) and with every part at mid-tolerance; smallest group that stays above "
-     "the limit in the worst case", "ISO 5753-1:2009, Table 1"),
+    ("Operating clearance = initial clearance (ISO 5753-1 group) - fit-up - thermal, in every temperature "
+     "state (mounted at room temperature, operating, lowest and highest ambient); the verdict holds the "
+     "mean clearance (every tolerance at its mean) of the governing state against the limit",
+     "ISO 5753-1:2009, Table 1"),
+    ("Probable range: clearance at each seat's maximum probable interference, mean + 1/2*sqrt(T_ring^2 + "
+     "T_seat^2), with the group's mean clearance; sigma of the clearance by root sum of squares (each band "
+     "+-3 sigma normal, or uniform) and P(clearance < limit); the arithmetic worst case as information",
+     "statistical tolerancing (RSS); probable-interference rule of bearing-engineering handbooks "
+     "(from memory); fitcheck.core.clearance_stats"),
     ("Ring under circumferential load: interference at the loosest pairing after smoothing and at "
      "operating temperature, else at least at mid-tolerance", "DIN 5425-1; DIN 7190-1:2017, 6.2, 6.4"),
     ("Axial force held by friction where no shoulder or retaining ring is declared, mu*p*pi*d*B, "
@@ -544,6 +557,9 @@ class BearingSeatInput:
     clearance_min: float = 0.0
     friction: float | None = DEFAULTS["friction"]
     hoop_stress_limit: float = DEFAULTS["hoop_stress_limit"]
+    temperature_min: float | None = None
+    temperature_max: float | None = None
+    clearance_distribution: str = "normal"
 
     @classmethod
     def from_mapping(cls, mapping: Mapping, field: str = "bearing") -> BearingSeatInput:
@@ -592,8 +608,12 @@ class BearingSeatInput:
         for k in ("rz_shaft", "rz_housing", "rz_ring"):
             take(k, lambda v, k: to_core(v, "small_length", k, lo=0, hi=100))
         for k in ("temperature_inner", "temperature_outer", "temperature_shaft",
-                  "temperature_housing", "temperature_assembly"):
+                  "temperature_housing", "temperature_assembly", "temperature_min", "temperature_max"):
             take(k, _temperature)
+        take("clearance_distribution", lambda v, k: _choice(v, stats.DISTRIBUTIONS, k))
+        if vals.get("temperature_min", -math.inf) > vals.get("temperature_max", math.inf):
+            errs.add(InputError(f"{field}.temperature_min", m["temperature_min"],
+                                f"a temperature <= temperature_max ({m['temperature_max']!r})"))
         take("axial_force", lambda v, k: to_core(v, "force", k, lo=0))
         take("axial_location", lambda v, k: _choice(v, AXIAL_LOCATIONS, k))
         take("clearance_min", lambda v, k: to_core(v, "small_length", k, lo=-200, hi=500))
@@ -751,6 +771,18 @@ class BearingSeatResult:
     temperature_housing_C: float
     notes: tuple[str, ...]
     checks: tuple[Check, ...]
+    clearance_state: str = ""                  # the state whose mean clearance is smallest
+    clearance_mean_um: float = math.nan        # mean operating clearance there (the verdict)
+    clearance_probable_min_um: float = math.nan  # at both seats' maximum probable interference
+    clearance_sigma_um: float = math.nan
+    clearance_probability_below: float = math.nan  # P(clearance < clearance_min)
+    clearance_distribution: str = "normal"
+    clearance_worst_case_um: float = math.nan  # arithmetic worst case over every state (information)
+    smallest_group_worst_case: str | None = None
+    clearance_states: tuple = ()               # per state: dict of state, mean, probable_min, sigma, ...
+    temperature_min_C: float | None = None
+    temperature_max_C: float | None = None
+    headline: str = ""
 
     @property
     def ok(self) -> bool:
@@ -759,6 +791,7 @@ class BearingSeatResult:
 
     def to_dict(self) -> dict:
         d = {f.name: getattr(self, f.name) for f in fields(self) if f.name != "checks"}
+        d["clearance_states"] = [dict(x) for x in self.clearance_states]
         d = {k: list(v) if isinstance(v, tuple) else v for k, v in d.items()}
         d["checks"] = [c.to_dict() for c in self.checks]
         d["ok"] = self.ok
@@ -791,8 +824,11 @@ def _pair(a) -> tuple[float, float]:
 def evaluate(inp: BearingSeatInput) -> BearingSeatResult:
     """Fit, ring deformation and operating clearance of one bearing seat.
 
-    Worst-case (arithmetic) pairing of the tolerance limits; the smallest operating clearance
-    comes from the tightest pairing of both seats, the largest from the loosest.
+    Every temperature state is evaluated (mounted at room temperature, operating, and the lowest
+    and highest ambient where given). The clearance verdict holds the *mean* operating clearance
+    (every tolerance at its mean) of the governing state against ``clearance_min``; beside it the
+    probable range (:func:`fitcheck.core.clearance_stats.probable_clearance`). The arithmetic
+    worst case (tightest pairing of both seats, smallest group clearance) stays as information.
 
     Examples
     --------
@@ -800,8 +836,10 @@ def evaluate(inp: BearingSeatInput) -> BearingSeatResult:
     ...                                              "housing": "H7"}))
     >>> r.shaft_interference_um, r.housing_clearance_um
     ((2.0, 21.0), (0.0, 36.0))
-    >>> [round(x, 1) for x in r.operating_clearance_um], r.smallest_passing_group
+    >>> [round(x, 1) for x in r.operating_clearance_um], r.smallest_group_worst_case
     ([-8.3, 20.0], 'C4')
+    >>> round(r.clearance_mean_um, 1), round(r.clearance_probable_min_um, 1), r.ok
+    (6.3, 1.3, True)
     """
     if isinstance(inp, Mapping):
         inp = BearingSeatInput.from_mapping(inp)
@@ -877,17 +915,39 @@ def evaluate(inp: BearingSeatInput) -> BearingSeatResult:
     # clearance
     kind_dg = b.kind == "deep_groove_ball"
     group = inp.clearance_group
+    # raceway change per µm of effective interference (Lamé: linear in the interference)
+    k_i = float(np.asarray(core.inner_ring_fit(1e-3, b.d, di, d_ie, m_s.E, m_s.nu, ring.E, ring.nu)[1])) * 1e3
+    k_o = float(np.asarray(core.outer_ring_fit(1e-3, b.D, D_oe, Dh, ring.E, ring.nu, m_h.E, m_h.nu)[1])) * 1e3
+    states = _seat_states(ta, ti, to, tsh, th, inp.temperature_min, inp.temperature_max)
+    tol = dict(inner_ring_um=(bore_dev[1], bore_dev[0]), shaft_um=(float(zs.lower_um), float(zs.upper_um)),
+               outer_ring_um=(out_dev[1], out_dev[0]), housing_um=(float(zh.lower_um), float(zh.upper_um)))
+
+    def state_stats(g_pair, st_, full=True):
+        _, t_i, t_o, t_s, t_h = st_
+        return stats.probable_clearance(
+            g_pair, **tol, s_inner=float(s_i), s_outer=float(s_o),
+            dt_inner=1000.0 * core.thermal_interference_change(b.d, m_s.alpha, t_s, ring.alpha, t_i, ta),
+            dt_outer=1000.0 * core.thermal_interference_change(b.D, ring.alpha, t_o, m_h.alpha, t_h, ta),
+            k_inner=k_i, k_outer=k_o,
+            ring_thermal_um=1000.0 * core.thermal_clearance_reduction(ring.alpha, t_i, t_o, b.pitch_diameter),
+            required_um=inp.clearance_min, distribution=inp.clearance_distribution, full=full)
+
     if kind_dg:
         g0 = np.array(radial_clearance(b.d, group))
-        smallest = None
+        per_state = [dict(state=st_[0], **state_stats(g0, st_)) for st_ in states]
+        gov = min(per_state, key=lambda x: (x["mean"], -x["p_below"]))
+        smallest = smallest_wc = None
         for g in _groups_at(b.d):
-            gl, _ = radial_clearance(b.d, g)
-            if gl - red_op[1] >= inp.clearance_min:
+            gl, gh = radial_clearance(b.d, g)
+            quick = [state_stats((gl, gh), st_, full=False) for st_ in states]
+            if smallest is None and min(q["mean"] for q in quick) >= inp.clearance_min:
                 smallest = g
-                break
+            if smallest_wc is None and min(q["worst_min"] for q in quick) >= inp.clearance_min:
+                smallest_wc = g
     else:
         g0 = np.array([math.nan, math.nan])
-        smallest = None
+        per_state, gov = [], None
+        smallest = smallest_wc = None
         notes.append("ISO 5753-1 clearance groups apply to deep-groove ball bearings; an angular-contact "
                      "bearing is set by adjustment: the fit-up and thermal change of its clearance "
                      "(or preload) are given, the operating clearance is not")
@@ -907,40 +967,71 @@ def evaluate(inp: BearingSeatInput) -> BearingSeatResult:
 
     checks: list[Check] = []
     if kind_dg:
+        worst_all = min(x["worst_min"] for x in per_state)
+        dist = "±3σ normal" if inp.clearance_distribution == "normal" else "uniform"
         checks.append(Check(
-            "operating radial clearance (tightest pairing)", float(operating[0]), inp.clearance_min,
-            ">=", "um", "ISO 5753-1:2009, Table 1; Lamé ring deformation (Shigley eq. 3-56)",
-            f"group {group}, arithmetic worst case; at mid-tolerance {operating_mid:.1f} um; smallest "
-            f"group that stays above the limit in the worst case: {smallest or 'none tabulated'}"))
-        if operating[0] < inp.clearance_min:
+            "operating radial clearance (mean, probable combination)", gov["mean"], inp.clearance_min,
+            ">=", "um", "ISO 5753-1:2009, Table 1; Lamé ring deformation (Shigley eq. 3-56); statistical "
+            "tolerancing (RSS), probable-interference rule of bearing-engineering handbooks",
+            f"governing state: {gov['state']}; group {group}, every tolerance at its mean; at the maximum "
+            f"probable interference {gov['probable_min']:.1f} um; σ {gov['sigma']:.1f} um ({dist} bands), "
+            f"P(clearance < {inp.clearance_min:g} um) = {100 * gov['p_below']:.1f} %; arithmetic worst case "
+            f"{worst_all:.1f} um (information); smallest group whose mean passes: "
+            f"{smallest or 'none tabulated'}"))
+        if gov["probable_min"] < inp.clearance_min:
+            notes.append(
+                f"the probable minimum clearance ({gov['probable_min']:.1f} um, {gov['state']}) is below "
+                f"{inp.clearance_min:g} um: about {100 * gov['p_below']:.1f} % of the bearings of a lot run "
+                "with slight preload: acceptable for deep-groove ball bearings at moderate speed; choose "
+                f"{_next_group(b.d, group) or 'a larger group'} for a hot inner ring or high speed")
+        if operating[0] < inp.clearance_min or worst_all < inp.clearance_min:
             notes.append(_worst_case_note(
-                group, smallest, inp.clearance_min, operating[0], operating_mid, red_op[1],
-                float(g0[0]), (shaft_cls, float(zs.upper_um), float(bore_dev[1])),
+                group, smallest_wc, inp.clearance_min, min(float(operating[0]), worst_all), operating_mid,
+                red_op[1], float(g0[0]), (shaft_cls, float(zs.upper_um), float(bore_dev[1])),
                 (housing_cls, float(zh.lower_um)) if np.asarray(contr_o)[4] > 0 else None,
-                b.d, red_op[1] - float(_clearance_min_below(b.d, smallest)) if smallest else None))
-    hoop_max = float(np.max(hoop_i))
+                b.d, red_op[1] - float(_clearance_min_below(b.d, smallest_wc)) if smallest_wc else None))
+    # the other temperature states (lowest / highest ambient): grip of the loosest and stress of the
+    # tightest pairing, state by state; (name, thermal change inner, outer) [µm]
+    dts = [(st_[0], 1000.0 * core.thermal_interference_change(b.d, m_s.alpha, st_[3], ring.alpha, st_[1], ta),
+            1000.0 * core.thermal_interference_change(b.D, ring.alpha, st_[2], m_h.alpha, st_[4], ta))
+           for st_ in states]
+    hoop_max, hoop_state = float(np.max(hoop_i)), "operating"
+    hoop_h_max = float(np.max(hoop_h))
+    for name_, dt_i, dt_o in dts:
+        hi_ = float(np.asarray(core.inner_ring_fit((ui_eff[1] + dt_i) / 1000.0, b.d, di, d_ie, m_s.E, m_s.nu,
+                                                   ring.E, ring.nu)[2]))
+        if hi_ > hoop_max:
+            hoop_max, hoop_state = hi_, name_
+        po_ = core.outer_ring_fit((uo_eff[1] + dt_o) / 1000.0, b.D, D_oe, Dh, ring.E, ring.nu, m_h.E, m_h.nu)[0]
+        hoop_h_max = max(hoop_h_max, float(np.asarray(hub_stresses(po_, b.D, Dh, b.D / 2.0)[1])))
     checks.append(Check("hoop stress at the inner-ring bore", hoop_max, inp.hoop_stress_limit, "<=",
                         "MPa", "Lamé, Shigley eq. (3-58); limit: common practice for through-hardened rings "
-                        "(about 25 ksi)"))
-    hoop_h_max = float(np.max(hoop_h))
+                        "(about 25 ksi)", f"tightest pairing; governing state: {hoop_state}"))
     if hoop_h_max > 0 and math.isfinite(m_h.Rp02):
         checks.append(Check("hoop stress at the housing bore", hoop_h_max, m_h.Rp02, "<=", "MPa",
                             "Lamé, Shigley eq. (3-58); limit: yield strength Rp0.2 of the housing"))
     rotating = ("inner ring on shaft", ui_eff, ui_op, s_i) if inp.load == "rotating_inner" \
         else ("outer ring in housing", uo_eff, uo_op, s_o)
+    # the loosest state of the ring under circumferential load (operating, or a colder / hotter ambient)
+    k_rot = 1 if inp.load == "rotating_inner" else 2
+    grip_state, grip_dt = "operating", float(rotating[2][0] - rotating[1][0])
+    for x in dts:
+        if x[k_rot] < grip_dt - 1e-12:
+            grip_state, grip_dt = x[0], x[k_rot]
+    rotating = (rotating[0], rotating[1], np.asarray(rotating[1]) + grip_dt, rotating[3])
     if rotating[1][0] > 0:
         checks.append(Check(
             f"rotating-load ring keeps its grip at operating temperature ({rotating[0]})",
             float(rotating[2][0]), 0.0, ">=", "um", "DIN 7190-1:2017, 6.4 (thermal change of interference)",
             "loosest pairing, effective interference after smoothing; a ring under circumferential load "
-            "that loses its interference creeps"))
+            f"that loses its interference creeps; governing state: {grip_state}"))
     else:
         # the loosest pairing has no grip: hold at least the mid-tolerance pairing to an interference
         checks.append(Check(
             f"rotating-load ring is an interference fit at mid-tolerance ({rotating[0]})",
             float(rotating[2][2]), 0.0, ">=", "um",
             "DIN 5425-1 (ring under circumferential load: interference fit); DIN 7190-1:2017, 6.2, 6.4",
-            "every part at the middle of its tolerance, after smoothing, at operating temperature"))
+            f"every part at the middle of its tolerance, after smoothing; governing state: {grip_state}"))
         notes.append(f"the loosest pairing of the {rotating[0]} seat has no interference left after "
                      f"smoothing ({float(rotating[2][0]):.1f} um at operating temperature, smoothing "
                      f"{float(rotating[3]):.1f} um); at mid-tolerance it is {float(rotating[2][2]):.1f} um. "
@@ -988,7 +1079,62 @@ def evaluate(inp: BearingSeatInput) -> BearingSeatResult:
         temperature_assembly_C=ta, temperature_inner_C=ti, temperature_outer_C=to,
         temperature_shaft_C=tsh, temperature_housing_C=th,
         notes=tuple(dict.fromkeys(notes)), checks=tuple(checks),
+        clearance_state=gov["state"] if gov else "", clearance_mean_um=gov["mean"] if gov else math.nan,
+        clearance_probable_min_um=gov["probable_min"] if gov else math.nan,
+        clearance_sigma_um=gov["sigma"] if gov else math.nan,
+        clearance_probability_below=gov["p_below"] if gov else math.nan,
+        clearance_distribution=inp.clearance_distribution,
+        clearance_worst_case_um=min((x["worst_min"] for x in per_state), default=math.nan),
+        smallest_group_worst_case=smallest_wc, clearance_states=tuple(per_state),
+        temperature_min_C=inp.temperature_min, temperature_max_C=inp.temperature_max,
+        headline=_seat_headline(checks, gov, group, smallest),
     )
+
+
+def _seat_states(ta, ti, to, tsh, th, tmin, tmax) -> list[tuple]:
+    """(name, t_inner, t_outer, t_shaft, t_housing) of every temperature state of a seat [°C]."""
+    out = [(f"mounted, room temperature ({ta:g} °C)", ta, ta, ta, ta)]
+    if (ti, to, tsh, th) != (ta, ta, ta, ta):
+        parts = f"inner ring {ti:g} °C, outer ring {to:g} °C"
+        if (tsh, th) != (ti, to):
+            parts += f", shaft {tsh:g} °C, housing {th:g} °C"
+        out.append((f"operating ({parts})", ti, to, tsh, th))
+    for t, what in ((tmin, "lowest"), (tmax, "highest")):
+        if t is not None and t != ta:
+            out.append((f"{what} ambient {t:g} °C, all parts (at standstill)", t, t, t, t))
+    return out
+
+
+def _next_group(d: float, group: str) -> str | None:
+    groups = _groups_at(d)
+    i = groups.index(group) if group in groups else -1
+    return groups[i + 1] if 0 <= i < len(groups) - 1 else None
+
+
+def _seat_headline(checks, gov, group, smallest) -> str:
+    """One sentence first read: the verdict, its cause and the next step."""
+    failing = [c for c in checks if not c.passed]
+    if not failing:
+        if gov is None:
+            return "Every check holds (the operating clearance of an angular-contact bearing is set by adjustment)."
+        return (f"Holds: mean operating clearance {gov['mean']:.1f} um ({gov['state']}), "
+                f"{100 * gov['p_below']:.1f} % of a lot below the limit.")
+    out = []
+    for c in failing:
+        if c.name.startswith("operating radial clearance"):
+            out.append(f"Too little clearance: the mean operating clearance is {c.value:.1f} um against "
+                       f"{c.limit:g} um ({gov['state']}). Next: group {smallest or 'larger than tabulated'} "
+                       "or a looser shaft or housing class (fitcheck search)")
+        elif c.name.startswith("rotating-load ring"):
+            out.append(f"The ring under circumferential load may creep ({c.value:.1f} um of interference). "
+                       "Next: a tighter class for that seat, finer roughness (fitcheck search)")
+        elif c.name.startswith("hoop stress"):
+            out.append(f"{c.name[0].upper()}{c.name[1:]} {c.value:.0f} MPa exceeds {c.limit:.0f} MPa. "
+                       "Next: a looser class")
+        else:
+            out.append(f"{c.name[0].upper()}{c.name[1:]} fails ({c.value:.4g} {c.unit} against {c.limit:.4g}). "
+                       "Next: a shoulder or retaining ring, or a tighter seat")
+    return "Does not hold. " + " ".join(x + "." for x in out)
 
 
 def _seat_friction(male: Material, female: Material, notes: list) -> float:
@@ -1022,7 +1168,8 @@ def _worst_case_note(group, smallest, limit, worst, mid, reduction, g_min, shaft
     parts = [f"largest shaft ({cls} {upper:+g} um) in the smallest ring bore ({bore_lower:+g} um)"]
     if housing is not None:
         parts.append(f"smallest housing bore ({housing[0]} {housing[1]:+g} um) on the largest outer ring")
-    text = (f"group {group} fails only in the arithmetic worst case: {' and '.join(parts)}, with the "
+    text = (f"group {group} loses its clearance only in the arithmetic worst case (information; the verdict is "
+            f"the mean clearance): {' and '.join(parts)}, with the "
             f"smallest {group} clearance ({g_min:g} um); fit-up and temperature then take {reduction:.1f} um "
             f"and leave {worst:.1f} um (limit {limit:g} um). With every part at mid-tolerance the operating "
             f"clearance is {mid:.1f} um. ")
@@ -1046,8 +1193,8 @@ def summary_rows(result: BearingSeatResult) -> list[list[str]]:
     def pr(p, digits=1):
         return [fmt(p[0], digits), fmt(p[1], digits)]
     return [
-        ["bore deviation (ISO 492)", *pr(result.bore_deviation_um, 0), "um"],
-        ["outside-diameter deviation (ISO 492)", *pr(result.outside_deviation_um, 0), "um"],
+        ["bore deviation (ISO 492), lower / upper", *pr(result.bore_deviation_um[::-1], 0), "um"],
+        ["outside-diameter deviation (ISO 492), lower / upper", *pr(result.outside_deviation_um[::-1], 0), "um"],
         [f"shaft {result.shaft_class}: interference", *pr(result.shaft_interference_um, 0), "um"],
         [f"housing {result.housing_class}: clearance", *pr(result.housing_clearance_um, 0), "um"],
         ["inner seat, effective interference at operation", *pr(result.shaft_interference_operating_um), "um"],
@@ -1060,6 +1207,8 @@ def summary_rows(result: BearingSeatResult) -> list[list[str]]:
         ["operating clearance", *pr(result.operating_clearance_um), "um"],
         ["operating clearance, every part at mid-tolerance", fmt(result.operating_clearance_mid_um, 1),
          "", "um"],
+        ["operating clearance, mean (verdict) / at max. probable interference",
+         fmt(result.clearance_mean_um, 1), fmt(result.clearance_probable_min_um, 1), "um"],
     ]
 
 

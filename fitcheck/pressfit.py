@@ -59,7 +59,8 @@ KEYS: dict[str, str] = {
     "length": "length of the joint (hub width in contact), e.g. '16 mm'",
     "shaft_bore": "bore of a hollow shaft, e.g. '8 mm' (default 0 = solid)",
     "hub_outer_diameter": "outer diameter of the hub, e.g. '40 mm' (or module + teeth)",
-    "module": "gear module, e.g. '1.5 mm': equivalent hub diameter = root diameter m·(z − 2.5)",
+    "module": "gear (normal) module, e.g. '1.5 mm': equivalent hub diameter = root diameter "
+              "m·z/cos β − 2.5·m + 2·x·m",
     "teeth": "number of teeth z (with module)",
     "shaft_material": "material name of data/materials.csv, or an inline table (E, nu, alpha, Rp02, Rm, density)",
     "hub_material": "material name or inline table, as shaft_material",
@@ -87,6 +88,12 @@ KEYS: dict[str, str] = {
               "material may yield partly, DIN 7190-1:2017)",
     "plastic_zone_limit": "elastic-plastic design: share of the hub wall thickness the plastic zone may "
                           "reach, (D_pl − d)/(D_o − d) (default 0.3, from memory of DIN 7190-1:2017)",
+    "temperature_min": "lowest ambient temperature, e.g. '-10 degC': shaft and hub both at it, at "
+                       "standstill and at speed (cold start); also read from [conditions]",
+    "temperature_max": "highest ambient temperature, e.g. '70 degC': shaft and hub both at it; also read "
+                       "from [conditions]",
+    "profile_shift": "profile shift coefficient x of a gear hub given by module + teeth (default 0)",
+    "helix_angle": "helix angle β of a gear hub given by module + teeth, e.g. '15 deg' (default 0)",
 }
 
 #: (step of the method in words, standard clause or book equation) for the report.
@@ -288,6 +295,10 @@ class PressFitInput:
     press_force_limit: float | None = None   # [N]
     design: str = "elastic"
     plastic_zone_limit: float = DEFAULTS["plastic_zone_limit"]  # share of the hub wall [-]
+    temperature_min: float | None = None     # [°C] lowest ambient (both parts)
+    temperature_max: float | None = None     # [°C] highest ambient (both parts)
+    profile_shift: float = 0.0               # [-] gear hub
+    helix_angle: float = 0.0                 # [rad] gear hub
 
     # ------------------------------------------------------------------ reading
     @classmethod
@@ -368,6 +379,16 @@ class PressFitInput:
         parse("press_force_limit", lambda x, k: to_core(x, "force", k, lo=0.0, lo_open=True, hi=1e10))
         parse("design", lambda x, k: _design(x, k))
         parse("plastic_zone_limit", lambda x, k: number(x, k, lo=0.0, hi=1.0, lo_open=True))
+        for key in ("temperature_min", "temperature_max"):
+            parse(key, lambda x, k: temperature_c(x, k, lo=_T_OP[0], hi=_T_OP[1]))
+        parse("profile_shift", lambda x, k: number(x, k, lo=-1.0, hi=2.0))   # common practice range
+        parse("helix_angle", lambda x, k: to_core(x, "angle", k, lo=0.0, hi=math.radians(45.0)))
+        if "temperature_min" in v and "temperature_max" in v and v["temperature_min"] > v["temperature_max"]:
+            errs.add(InputError(f"{field}.temperature_min", g("temperature_min"),
+                                f"a temperature <= temperature_max ({g('temperature_max')!r})"))
+        if ("profile_shift" in mapping or "helix_angle" in mapping) and "module" not in mapping:
+            errs.add(InputError(f"{field}.profile_shift" if "profile_shift" in mapping else f"{field}.helix_angle",
+                                g("profile_shift", g("helix_angle")), "only with module and teeth (a gear hub)"))
 
         # ---- required keys and alternatives
         has_fit = "fit" in mapping
@@ -426,10 +447,13 @@ class PressFitInput:
             if do is not None and do <= d:
                 errs.add(InputError(f"{field}.hub_outer_diameter", g("hub_outer_diameter"),
                                     f"a diameter larger than the joint diameter ({d:g} mm)"))
-            if "module" in v and "teeth" in v and v["module"] * (v["teeth"] - 2.5) <= d:
-                errs.add(InputError(f"{field}.teeth", g("teeth"),
-                                    f"a gear whose root diameter m·(z − 2.5) exceeds the bore {d:g} mm "
-                                    f"(now {v['module'] * (v['teeth'] - 2.5):g} mm)"))
+            if "module" in v and "teeth" in v:
+                df = root_diameter(v["module"], v["teeth"], v.get("profile_shift", 0.0),
+                                   v.get("helix_angle", 0.0))
+                if df <= d:
+                    errs.add(InputError(f"{field}.teeth", g("teeth"),
+                                        f"a gear whose root diameter m·z/cos β − 2.5·m + 2·x·m exceeds the "
+                                        f"bore {d:g} mm (now {df:g} mm)"))
             jc = v.get("joining_clearance")
             if jc is not None and jc > 0.02 * d:
                 errs.add(InputError(f"{field}.joining_clearance", g("joining_clearance"),
@@ -489,6 +513,13 @@ class PressFitInput:
         if self.design != "elastic" or self.plastic_zone_limit != DEFAULTS["plastic_zone_limit"]:
             out["design"] = self.design
             out["plastic_zone_limit"] = self.plastic_zone_limit
+        for k in ("temperature_min", "temperature_max"):
+            if getattr(self, k) is not None:
+                out[k] = _fmt(getattr(self, k), "degC")
+        if self.profile_shift:
+            out["profile_shift"] = self.profile_shift
+        if self.helix_angle:
+            out["helix_angle"] = f"{self.helix_angle!r} rad"
         return out
 
     # ------------------------------------------------------------------ derived
@@ -512,9 +543,28 @@ class PressFitInput:
             return self.hub_outer_diameter, "given"
         if self.module is None or self.teeth is None:
             raise InputError("pressfit.hub_outer_diameter", None, "hub_outer_diameter or module + teeth")
-        return (self.module * (self.teeth - 2.5),
-                f"root diameter m·(z − 2.5) = {self.module:g}·({self.teeth} − 2.5) mm "
-                "(standard full-depth teeth, dedendum 1.25·m)")
+        x, beta = self.profile_shift, self.helix_angle
+        df = root_diameter(self.module, self.teeth, x, beta)
+        if x == 0.0 and beta == 0.0:
+            return df, (f"root diameter m·(z − 2.5) = {self.module:g}·({self.teeth} − 2.5) mm "
+                        "(standard full-depth teeth, dedendum 1.25·m)")
+        return df, (f"root diameter m·z/cos β − 2.5·m + 2·x·m with m = {self.module:g} mm, z = {self.teeth}, "
+                    f"β = {math.degrees(beta):g}°, x = {x:g}: {df:.4g} mm (full-depth teeth, dedendum "
+                    "1.25·m, ISO 21771:2007)")
+
+
+def root_diameter(m_n: float, z: int, x: float = 0.0, beta: float = 0.0) -> float:
+    """Root diameter of a cylindrical gear [mm]: d_f = m_n·z/cos β − 2·(1.25 − x)·m_n.
+
+    Reference diameter d = m_n·z/cos β and dedendum h_f = (1.25 − x)·m_n of the standard basic
+    rack (ISO 53:1998, h_fP = 1.25·m; ISO 21771:2007, d = z·m_n/cos β, profile shift x·m_n).
+
+    >>> root_diameter(2.0, 30)
+    55.0
+    >>> round(root_diameter(2.0, 30, 0.5, math.radians(20.0)), 4)   # 63.8507 − 5 + 2
+    60.8507
+    """
+    return m_n * z / math.cos(beta) - 2.5 * m_n + 2.0 * x * m_n
 
 
 def _parse_fit(text, key):
@@ -586,6 +636,10 @@ class PressFitCase:
     shaft_sigma_t_surface: float
     shaft_sigma_t_inner: float   # at a hollow shaft's bore, or at the centre of a solid one
     shaft_von_mises_max: float
+    state: str = ""              # operating state, e.g. "cold start at 20 000 rpm"
+    speed: float = 0.0           # [rad/s] of the state
+    temperature_shaft: float = math.nan  # [°C] of the state
+    temperature_hub: float = math.nan    # [°C] of the state
 
     def to_dict(self) -> dict:
         return {f.name: getattr(self, f.name) for f in fields(self)}
@@ -649,10 +703,29 @@ class PressFitResult:
     plastic_zone_diameter: float = math.nan  # [mm] at the tightest case; = diameter while elastic
     plastic_utilisation: float = 0.0         # plastic share of the hub wall / permitted share [-]
     plastic_zone_limit: float = DEFAULTS["plastic_zone_limit"]
+    loosest_governing: PressFitCase | None = None   # the state with the smallest pressure
+    tightest_governing: PressFitCase | None = None  # the state with the largest hub stress
+    states: tuple[PressFitCase, ...] = ()           # loosest and tightest case of every state
+    governing_loose_state: str = ""
+    governing_tight_state: str = ""
+    loosening_state: str = ""
+    loosening_note: str = ""                        # "not applicable: …" where no speed loosens it
+    temperature_min: float | None = None
+    temperature_max: float | None = None
+    headline: str = ""
 
     @property
     def ok(self) -> bool:
         return bool(self.checks) and all(c.passed for c in self.checks)
+
+    @property
+    def loosening_speed_text(self) -> str:
+        """The loosening speed as people read it: a speed in rpm, or "not applicable (why)"."""
+        if self.loosening_note:
+            return self.loosening_note
+        if math.isinf(self.loosening_speed):
+            return "none (rotation does not loosen this joint)"
+        return f"{self.loosening_speed_rpm:.0f} rpm ({self.loosening_state})"
 
     @property
     def loosening_speed_rpm(self) -> float:
@@ -665,9 +738,13 @@ class PressFitResult:
         Returns a dict of arrays: ``r_shaft``, ``sr_shaft``, ``st_shaft``, ``vm_shaft``,
         ``r_hub``, ``sr_hub``, ``st_hub``, ``vm_hub`` ([mm], [MPa]).
         """
-        op = self.governing_tight_condition == "operating"
-        case = self.tightest_operating if op else self.tightest_assembly
-        w = self.speed if op else 0.0
+        case = self.tightest_governing
+        if case is None:
+            op = self.governing_tight_condition == "operating"
+            case = self.tightest_operating if op else self.tightest_assembly
+            w = self.speed if op else 0.0
+        else:
+            w = case.speed
         d, di, Do = self.diameter, self.shaft_bore, self.hub_outer_diameter
         rs = np.linspace(di / 2.0, d / 2.0, n)
         rh = np.linspace(d / 2.0, Do / 2.0, n)
@@ -683,7 +760,7 @@ class PressFitResult:
         srh, sth = srh + a, sth + b
         return {"r_shaft": rs, "sr_shaft": srs, "st_shaft": sts, "vm_shaft": lame.von_mises(srs, sts),
                 "r_hub": rh, "sr_hub": srh, "st_hub": sth, "vm_hub": lame.von_mises(srh, sth),
-                "condition": self.governing_tight_condition,
+                "condition": self.governing_tight_condition, "state": case.state,
                 "plastic_zone_diameter": d_pl}
 
     def torque_capacity_at(self, interference) -> np.ndarray:
@@ -692,7 +769,7 @@ class PressFitResult:
         Linear in the interference above the loss by smoothing, temperature and speed; 0 below.
         In the elastic-plastic design the pressure follows the partly plastic hub (first loading).
         """
-        lo = self.loosest_operating
+        lo = self.loosest_governing or self.loosest_operating
         loss = lo.interference - lo.effective_interference
         if self.design == "elastic-plastic":  # first loading of the partly plastic hub
             s, h = self.shaft_material, self.hub_material
@@ -769,6 +846,14 @@ class PressFitResult:
             "design": self.design,
             "plastic_zone_diameter_mm": self.plastic_zone_diameter,
             "plastic_utilisation": self.plastic_utilisation,
+            "governing_loose_state": self.governing_loose_state,
+            "governing_tight_state": self.governing_tight_state,
+            "loosening_state": self.loosening_state,
+            "loosening_speed": self.loosening_speed_text,
+            "temperature_min_C": self.temperature_min,
+            "temperature_max_C": self.temperature_max,
+            "states": [c.to_dict() for c in self.states],
+            "headline": self.headline,
         }
 
 
@@ -785,23 +870,56 @@ def _f(x) -> float:
 
 def _case(label, delta, d, L, di, Do, s: Material, h: Material, mu, loss_rz, Ts, Th, T0, w,
           p=None) -> PressFitCase:
-    de = delta - loss_rz + lame.thermal_interference_change(d, s.alpha, h.alpha, Ts, Th, T0) \
-        - lame.centrifugal_interference_loss(w, d, di, Do, s.E, s.nu, s.density, h.E, h.nu, h.density)
+    turning = w > 0.0   # rotation terms only when turning: an infinite hub at standstill gives 0, not 0·inf
+    de = delta - loss_rz + lame.thermal_interference_change(d, s.alpha, h.alpha, Ts, Th, T0)
+    if turning:
+        de = de - lame.centrifugal_interference_loss(w, d, di, Do, s.E, s.nu, s.density, h.E, h.nu, h.density)
     plastic_design = p is not None  # the elastic-plastic design passes the kernel's pressure
     if p is None:
         p = lame.contact_pressure(de, d, di, Do, s.E, s.nu, h.E, h.nu)
     hr, ht = lame.hub_stresses(p, d, Do, d / 2.0)
     if plastic_design and p > _ep.elastic_limit_pressure(d, Do, h.Rp02):  # plastic hub bore
         ht = _ep.KAPPA_DIN * h.Rp02 - p
-    ht += lame.rotating_disc_stresses(h.density, w, h.nu, d, Do, d / 2.0)[1]
     sr, st = lame.shaft_stresses(p, d, di, d / 2.0)
-    st += lame.rotating_disc_stresses(s.density, w, s.nu, di, d, d / 2.0)[1]
-    si = lame.shaft_stresses(p, d, di, di / 2.0)[1] + lame.rotating_disc_stresses(
-        s.density, w, s.nu, di, d, di / 2.0)[1]
+    si = lame.shaft_stresses(p, d, di, di / 2.0)[1]
+    if turning:
+        ht = ht + lame.rotating_disc_stresses(h.density, w, h.nu, d, Do, d / 2.0)[1]
+        st = st + lame.rotating_disc_stresses(s.density, w, s.nu, di, d, d / 2.0)[1]
+        si = si + lame.rotating_disc_stresses(s.density, w, s.nu, di, d, di / 2.0)[1]
     vm_s = max(_f(lame.von_mises(sr, st)), abs(_f(si)))
     fcap = p * math.pi * d * L * mu
     return PressFitCase(label, delta, _f(de), _f(p), _f(fcap * d / 2.0), _f(fcap), _f(hr), _f(ht),
-                        _f(lame.von_mises(hr, ht)), _f(sr), _f(st), _f(si), vm_s)
+                        _f(lame.von_mises(hr, ht)), _f(sr), _f(st), _f(si), vm_s,
+                        label, float(w), float(Ts), float(Th))
+
+
+def _rpm_text(w: float) -> str:
+    """A speed for people: ``20 000 rpm`` (thin groups of three)."""
+    return f"{w / RPM:,.0f} rpm".replace(",", "\u2009")
+
+
+def state_names(T0: float, Ts: float, Th: float, w: float, tmin: float | None = None,
+                tmax: float | None = None) -> list[str]:
+    """Names of the operating states in the order of the kernel's state codes (2·k + at speed).
+
+    >>> state_names(20.0, 80.0, 40.0, 20000 * RPM)[:2]
+    ['room temperature (20 °C) at standstill', 'cold start at 20\u2009000 rpm (20 °C)']
+    """
+    temps = _core.state_temperatures(Ts, Th, T0, tmin, tmax)
+    spin = _rpm_text(w)
+    out = []
+    for k, (ts, th) in enumerate(temps):
+        if k == 1:
+            t = f"shaft {ts:g} °C, hub {th:g} °C" if ts != th else f"{ts:g} °C"
+            out += [f"operating temperature ({t}) at standstill", f"operating temperature ({t}) at {spin}"]
+        elif k == 0:
+            start = f"cold start at {spin}" if ts <= min(Ts, Th) else f"room temperature at {spin}"
+            out += [f"room temperature ({ts:g} °C) at standstill", f"{start} ({ts:g} °C)"]
+        else:
+            what = "lowest ambient" if (k == 2 and tmin is not None) else "highest ambient"
+            start = "cold start" if ts <= T0 else "hot running"
+            out += [f"{what} {ts:g} °C at standstill", f"{start} at {spin} ({what} {ts:g} °C)"]
+    return out
 
 
 # --------------------------------------------------------------------------- evaluate
@@ -866,6 +984,7 @@ def core_arguments(inp: PressFitInput) -> tuple[dict, str, str]:
         max_heating=h.max_heating_C if not math.isnan(h.max_heating_C) else np.inf,
         T_shaft_cooled=inp.temperature_shaft_cooled if inp.temperature_shaft_cooled is not None else T0,
         press_force_limit=inp.press_force_limit if inp.press_force_limit is not None else np.inf,
+        T_min=inp.temperature_min, T_max=inp.temperature_max,
         design=inp.design, plastic_limit=inp.plastic_zone_limit)
     return kwargs, "; ".join(src_parts), do_rule
 
@@ -899,7 +1018,42 @@ def evaluate(inp: PressFitInput) -> PressFitResult:
         "tightest_assembly": _case("tightest, room temperature, standstill", imax, *args, T0, T0, T0, 0.0,
                                    ep["p_max_asm"]),
     }
-    tight_op = cases["tightest_operating"].hub_von_mises_bore >= cases["tightest_assembly"].hub_von_mises_bore
+    # every operating state: temperature state × (standstill, operating speed)
+    tmin, tmax = inp.temperature_min, inp.temperature_max
+    names = state_names(T0, Ts, Th, w, tmin, tmax)
+    temps = _core.state_temperatures(Ts, Th, T0, tmin, tmax)
+    states, by_code = [], {}
+    for code, name in enumerate(names):
+        ts, th = temps[code // 2]
+        ws = w if code % 2 else 0.0
+        if code % 2 and w == 0.0:
+            continue   # standstill is the only speed
+        lo = _case(name, imin, *args, ts, th, T0, ws)
+        hi = _case(name, imax, *args, ts, th, T0, ws)
+        by_code[code] = (lo, hi)
+    if inp.design == "elastic-plastic":
+        # the partly plastic hub yields at the largest interference over every state and unloads
+        # elastically to the others (the kernel's rule, core/pressfit.py), state by state
+        ep_args = (d, inp.shaft_bore, Do, s.E, s.nu, h.E, h.nu, h.Rp02)
+        c_p = _f(lame.contact_pressure(1.0, d, inp.shaft_bore, Do, s.E, s.nu, h.E, h.nu))
+        for j, delta in ((0, imin), (1, imax)):
+            peak = max(pair[j].effective_interference for pair in by_code.values())
+            p_pk = _f(_ep.contact_pressure(peak, *ep_args))
+            for code, pair in list(by_code.items()):
+                c = pair[j]
+                p_state = max(p_pk - (peak - c.effective_interference) * c_p, 0.0)
+                ts, th = c.temperature_shaft, c.temperature_hub
+                new_c = _case(c.label, delta, *args, ts, th, T0, c.speed, p_state)
+                by_code[code] = (new_c, pair[1]) if j == 0 else (pair[0], new_c)
+    for code in by_code:
+        states += list(by_code[code])
+    code_lo, code_tight = int(r["state_p_min"]), int(r["state_hub"])
+    code_shaft, code_loose = int(r["state_shaft"]), int(r["state_loosening"])
+    state_lo, state_tight = names[code_lo], names[code_tight]
+    state_shaft = names[code_shaft]
+    state_loose = names[code_loose].replace(" at standstill", "")
+    loosest_gov, tightest_gov = by_code[code_lo][0], by_code[code_tight][1]
+    tight_op = code_tight != 0
 
     # ---- checks
     rpm = 1.0 / RPM
@@ -910,19 +1064,36 @@ def evaluate(inp: PressFitInput) -> PressFitResult:
     load_note = ("no torque or axial force given: only the contact pressure is checked"
                  if inp.torque == 0 and inp.axial_force == 0 else
                  f"demand √((2T/d)² + F²) with T = {inp.torque / 1000:g} N·m, F = {inp.axial_force:g} N")
+    # what takes the interference at the governing loosest state [mm]
+    loss_th = -_f(lame.thermal_interference_change(d, s.alpha, h.alpha, loosest_gov.temperature_shaft,
+                                                   loosest_gov.temperature_hub, T0))
+    loss_w = imin - loss_rz + (-loss_th) - loosest_gov.effective_interference
+    why_zero = _why_no_pressure(imin, loss_rz, loss_th, loss_w)
+    no_pressure_at_rest = by_code[code_loose][0].pressure <= 0
+    if r["loosening_speed"] > 0:
+        loosening_note = ""
+        speed_note = (f"governing state: {state_loose}; speed at which the loosest fit loses all contact "
+                      "pressure, against the operating speed")
+    elif math.isinf(Do) and not no_pressure_at_rest:
+        loosening_note = "not applicable: a hub of infinite outer diameter cannot turn"
+        speed_note = loosening_note
+    else:
+        loosening_note = (f"not applicable: the loosest fit has no contact pressure even at standstill "
+                          f"({state_loose})")
+        speed_note = loosening_note
     checks = [
         Check("slip at loosest fit", r["slip_safety_min"] if r["p_min"] > 0 else 0.0, inp.slip_safety, ">=",
-              "", REF_SLIP, load_note + ("" if r["p_min"] > 0 else "; no contact pressure (clearance)")),
+              "", REF_SLIP, f"governing state: {state_lo}; " + load_note
+              + ("" if r["p_min"] > 0 else f"; no contact pressure: {why_zero}")),
         Check("hub yield at tightest fit", r["hub_yield_safety"], hub_req, ">=", "", REF_HUB,
-              f"safety {hub_basis} at the hub bore") if inp.design == "elastic" else
+              f"governing state: {state_tight}; safety {hub_basis} at the hub bore") if inp.design == "elastic" else
         plastic_zone_check(r["plastic_zone_diameter_max"], d, Do, inp.plastic_zone_limit),
         Check("shaft yield at tightest fit", r["shaft_yield_safety"], shaft_req, ">=", "", REF_SHAFT,
-              f"safety {shaft_basis}, shaft surface and bore/centre"),
-        Check("loosening speed", r["loosening_speed"] * rpm if r["loosening_speed"] > 0 else math.nan,
-              w * rpm, ">=", "rpm", REF_SPEED,
-              "speed at which the loosest fit loses all contact pressure, against the operating speed"
-              if r["loosening_speed"] > 0 else
-              "the loosest fit has no contact pressure at operating temperature even at standstill"),
+              f"governing state: {state_shaft}; safety {shaft_basis}, shaft surface and bore/centre"),
+        # without contact pressure at standstill the joint holds at no speed at all: 0 rpm is held
+        # against at least 1 rpm, so the check fails rather than pass as "0 rpm >= 0 rpm"
+        Check("loosening speed", r["loosening_speed"] * rpm,
+              max(w * rpm, 1.0) if no_pressure_at_rest else w * rpm, ">=", "rpm", REF_SPEED, speed_note),
     ]
     warns: list[str] = []
     if shrink:
@@ -958,6 +1129,7 @@ def evaluate(inp: PressFitInput) -> PressFitResult:
                      "become uncertain")
     for msg in warns:
         warnings.warn(f"{label}: {msg}", MethodRangeWarning, stacklevel=2)
+    headline = _headline(checks, r, state_lo, state_tight, state_shaft, state_loose, why_zero, w)
 
     return PressFitResult(
         name=inp.name, fit=inp.fit, diameter=d, length=inp.length, shaft_bore=inp.shaft_bore,
@@ -979,6 +1151,9 @@ def evaluate(inp: PressFitInput) -> PressFitResult:
         checks=tuple(checks), warnings=tuple(warns),
         design=inp.design, plastic_zone_diameter=r["plastic_zone_diameter_max"],
         plastic_utilisation=r["plastic_utilisation"], plastic_zone_limit=inp.plastic_zone_limit,
+        loosest_governing=loosest_gov, tightest_governing=tightest_gov, states=tuple(states),
+        governing_loose_state=state_lo, governing_tight_state=state_tight, loosening_state=state_loose,
+        loosening_note=loosening_note, temperature_min=tmin, temperature_max=tmax, headline=headline,
     )
 
 
@@ -1001,3 +1176,56 @@ def plastic_zone_check(d_pl: float, d: float, Do: float, limit: float) -> Check:
         if d_pl >= Do:
             note += "; the hub is fully plastic"
     return Check("hub plastic zone at tightest fit", share, limit, "<=", "", REF_PLASTIC, note)
+
+
+def _why_no_pressure(imin: float, loss_rz: float, loss_th: float, loss_w: float) -> str:
+    """Which effects take the whole smallest interference (all in mm), for the verdict."""
+    parts = [f"smoothing {loss_rz * 1e3:.1f} um"]
+    if abs(loss_th) > 1e-7:
+        parts.append(f"temperature {loss_th * 1e3:+.1f} um")
+    if abs(loss_w) > 1e-7:
+        parts.append(f"speed {loss_w * 1e3:+.1f} um")
+    if imin <= 0:
+        return f"the loosest pairing is a clearance ({-imin * 1e3:.1f} um) before any loss"
+    return (f"{', '.join(parts)} take the whole smallest interference of {imin * 1e3:.1f} um, so the "
+            "joint slips")
+
+
+def _headline(checks, r, state_lo, state_tight, state_shaft, state_loose, why_zero, w) -> str:
+    """One sentence a reviewer reads first: the verdict, its real cause, and the next step."""
+    if all(c.passed for c in checks):
+        slip = checks[0]
+        return (f"Holds in every operating state: slip safety {slip.value:.3g} (governing: {state_lo}), "
+                f"hub yield safety {r['hub_yield_safety']:.3g} (governing: {state_tight}).")
+    out = []
+    by = {c.name: c for c in checks}
+    c = by["slip at loosest fit"]
+    if not c.passed:
+        if r["p_min"] <= 0:
+            nxt = ("an interference fit" if "is a clearance" in why_zero else
+                   "a tighter fit, or a material pair that keeps its interference in that state")
+            out.append(f"Slips: no contact pressure at the loosest fit ({state_lo}): {why_zero}. Next: "
+                       f"{nxt} (fitcheck search lists the fits that pass)")
+        else:
+            out.append(f"Slips: slip safety {c.value:.3g} < {c.limit:g} at the loosest fit ({state_lo}). "
+                       "Next: a tighter fit, a longer hub or a rougher, dry joint (fitcheck search)")
+    c = by.get("hub plastic zone at tightest fit")
+    if c is not None and not c.passed:
+        out.append(f"The hub's plastic zone exceeds its permitted share of the wall ({state_tight}): "
+                   f"{c.value:.0%} > {c.limit:.0%}. Next: a looser fit, a thicker hub or a stronger hub material")
+    for name, state, part in (("hub yield at tightest fit", state_tight, "hub bore"),
+                              ("shaft yield at tightest fit", state_shaft, "shaft")):
+        c = by.get(name)
+        if c is not None and not c.passed:
+            out.append(f"The {part} yields at the tightest fit ({state}): safety {c.value:.3g} < {c.limit:g}. "
+                       f"Next: a looser fit, a {'thicker hub' if part == 'hub bore' else 'solid or stronger shaft'}"
+                       " or a stronger material")
+    c = by["loosening speed"]
+    if not c.passed and r["p_min"] > 0:
+        out.append(f"Loosens at {c.value:.0f} rpm, below the operating {c.limit:.0f} rpm ({state_loose}). "
+                   "Next: a tighter fit or a thicker hub")
+    for c in checks[4:]:
+        if not c.passed:
+            out.append(f"{c.name[0].upper()}{c.name[1:]} {c.value:.4g} {c.unit} exceeds {c.limit:.4g} "
+                       f"{c.unit}. Next: {'cool the shaft or a looser fit' if 'heating' in c.name else 'a stronger press or a looser fit'}")
+    return "Does not hold. " + " ".join(x.rstrip(".") + "." for x in out)

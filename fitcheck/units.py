@@ -24,6 +24,7 @@ stripped once, here, and never enter a vectorised kernel.
 from __future__ import annotations
 
 import math
+import re
 from numbers import Real
 
 import numpy as np
@@ -121,6 +122,51 @@ def _parse(value, field: str):
     raise InputError(field, value, "a number or a string with a unit, e.g. '25 mm'")
 
 
+#: Kinds whose unit holds a temperature *difference* (a coefficient per kelvin, a temperature rise):
+#: an offset unit written in them (°C, °F, °Ré) means its degree, never a point on its scale.
+_DELTA_KINDS = frozenset({"expansion", "temperature_difference"})
+_OFFSET_UNITS = {"degree_Celsius": "delta_degree_Celsius", "degree_Fahrenheit": "delta_degree_Fahrenheit",
+                 "degree_Reaumur": "delta_degree_Reaumur"}
+_NAME = re.compile(r"(?<![\w.])[^\W\d][\w°]*|°[A-Za-z]+|℃|℉")
+
+
+def _offset_as_delta(value):
+    """``value`` with every offset temperature unit replaced by its degree (``degC`` -> ``delta_degC``).
+
+    A coefficient of expansion in ``1/degC`` is 1 per degree Celsius: the same size as ``1/K``.
+    pint reads ``"23.4e-6 1/degC"`` as 1/(an absolute temperature of 1 °C = 274.15 K) and gives
+    8.5e-8/K; ``"13e-6 1/degF"`` likewise. Here the units are rewritten before pint sees them, so
+    ``1/K``, ``1/degC``, ``1/delta_degC`` and ``1/degF`` (× 5/9) all give the same coefficient.
+
+    >>> _offset_as_delta("23.4e-6 1/degC")
+    '23.4e-6 1/delta_degree_Celsius'
+    >>> _offset_as_delta("60 °F")
+    '60 delta_degree_Fahrenheit'
+    """
+    if isinstance(value, pint.Quantity):
+        units = value._units
+        if any(name in _OFFSET_UNITS for name in units):
+            new = units
+            for name, exp in units.items():
+                if name in _OFFSET_UNITS:
+                    new = new.remove([name]).add(_OFFSET_UNITS[name], exp)
+            return Q_(value.magnitude, new)
+        return value
+    if not isinstance(value, str):
+        return value
+
+    def swap(m):
+        tok = m.group(0).replace("℃", "degC").replace("℉", "degF")
+        try:
+            names = ureg.parse_unit_name(tok)
+        except Exception:  # pint raises several types on odd names
+            return m.group(0)
+        if len(names) == 1 and names[0][1] in _OFFSET_UNITS and not names[0][0]:
+            return _OFFSET_UNITS[names[0][1]]
+        return m.group(0)
+    return _NAME.sub(swap, value)
+
+
 def to_core(value, kind: str, field: str, *, lo: float | None = None, hi: float | None = None,
             lo_open: bool = False, hi_open: bool = False) -> float:
     """Parse one scalar input into a float in the core unit of ``kind``.
@@ -154,7 +200,7 @@ def to_core(value, kind: str, field: str, *, lo: float | None = None, hi: float 
     """
     if kind not in CORE:
         raise KeyError(kind)
-    q = _parse(value, field)
+    q = _parse(_offset_as_delta(value) if kind in _DELTA_KINDS else value, field)
     if isinstance(q, float):
         out = q
     else:

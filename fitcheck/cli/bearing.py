@@ -30,6 +30,9 @@ JSON_KEYS = (
     "operating_clearance_um", "operating_clearance_mid_um", "smallest_passing_group", "ring_hoop_stress_max_MPa",
     "housing_hoop_stress_max_MPa", "axial_capacity_inner_N", "axial_capacity_outer_N", "notes",
     "checks", "ok",
+    "clearance_state", "clearance_mean_um", "clearance_probable_min_um", "clearance_sigma_um",
+    "clearance_probability_below", "clearance_distribution", "clearance_worst_case_um",
+    "smallest_group_worst_case", "clearance_states", "temperature_min_C", "temperature_max_C", "headline",
 )
 
 _OPTIONS = {  # option dest -> [[bearing]] key
@@ -151,10 +154,21 @@ def _text(r, out) -> None:
               "(DIN 5425-1)\n\n")
     print_table(["quantity", "min", "max", "unit"], summary_rows(r), out)
     out.write(f"\nhoop stress at the inner-ring bore, max: {r.ring_hoop_stress_max_MPa:.0f} MPa\n")
-    out.write(f"smallest clearance group that passes: {r.smallest_passing_group or 'none'}\n\n")
+    out.write(f"smallest clearance group that passes: {r.smallest_passing_group or 'none'} (mean clearance; "
+              f"in the arithmetic worst case: {r.smallest_group_worst_case or 'none'})\n")
+    if r.clearance_state:
+        out.write(f"operating clearance, governing state {r.clearance_state}: mean {r.clearance_mean_um:.1f} um, "
+                  f"at the maximum probable interference {r.clearance_probable_min_um:.1f} um, "
+                  f"sigma {r.clearance_sigma_um:.1f} um ({r.clearance_distribution}), "
+                  f"P(< {r.clearance_min_um:g} um) {100 * r.clearance_probability_below:.1f} %, "
+                  f"worst case {r.clearance_worst_case_um:.1f} um (information)\n")
+    out.write("\n")
     rows = [[c.name, f"{c.value:.4g} {c.unit}", f"{c.sense} {c.limit:.4g} {c.unit}",
              "pass" if c.passed else "FAIL"] for c in r.checks]
     print_table(["check", "value", "limit", "verdict"], rows, out)
     for n in r.notes:
         out.write(f"note: {n}\n")
-    out.write(f"\n{'all checks pass' if r.ok else 'a check FAILS'}\n\n")
+    out.write(f"\n{'all checks pass' if r.ok else 'a check FAILS'}\n")
+    if r.headline:
+        out.write(f"verdict: {r.headline}\n")
+    out.write("\n")

@@ -78,7 +78,10 @@ def _print_joint(r, out) -> None:
     out.write(f"interference {_g(r.interference_min * 1e3)} … {_g(r.interference_max * 1e3)} um, "
               f"smoothing loss {_g(r.roughness_loss * 1e3)} um\n\n")
     rows = []
-    for c in (r.loosest_operating, r.tightest_operating, r.loosest_assembly, r.tightest_assembly):
+    gov = tuple(c for c in (getattr(r, "loosest_governing", None), getattr(r, "tightest_governing", None)) if c)
+    gov = tuple(type(c)(**{**c.to_dict(), "label": f"{k}: {c.state}"}) for k, c in
+                zip(("GOVERNING loosest", "GOVERNING tightest"), gov, strict=False))
+    for c in (r.loosest_operating, r.tightest_operating, r.loosest_assembly, r.tightest_assembly, *gov):
         rows.append([c.label, _g(c.interference * 1e3), _g(c.effective_interference * 1e3), _g(c.pressure),
                      _g(c.torque_capacity / 1e3), _g(c.axial_capacity), _g(c.hub_von_mises_bore),
                      _g(c.shaft_von_mises_max)])
@@ -93,7 +96,8 @@ def _print_joint(r, out) -> None:
         ["press-in force (tightest, mu_press)", _g(r.press_force_max / 1e3), "kN"],
         ["hub temperature for shrinking" + ("" if r.assembly == "shrink" else " (if shrunk instead)"),
          _g(r.shrink_temperature_C), "degC"],
-        ["loosening speed (loosest)", _g(r.loosening_speed_rpm), "rpm"],
+        ["loosening speed (loosest)", "not applicable" if getattr(r, "loosening_note", "")
+         else _g(r.loosening_speed_rpm), "" if getattr(r, "loosening_note", "") else "rpm"],
     ] + ([["hub plastic zone Ø (tightest; depth " + _g((r.plastic_zone_diameter - r.diameter) / 2.0)
            + " mm)", _g(r.plastic_zone_diameter), "mm"],
           ["plastic utilisation (share of wall / permitted)", _g(r.plastic_utilisation), ""]]
@@ -108,6 +112,8 @@ def _print_joint(r, out) -> None:
     for w in r.warnings:
         out.write(f"caution: {w}\n")
     out.write(f"verdict: {'all checks pass' if r.ok else 'a check fails'}\n")
+    if getattr(r, "headline", ""):
+        out.write(f"{r.headline}\n")
 
 
 def run(args) -> int:

@@ -51,6 +51,16 @@ design, plastic_limit
     ``"elastic"`` (default) or ``"elastic-plastic"``: the hub of ductile material may yield
     partly (:mod:`fitcheck.core.elastoplastic`, DIN 7190-1:2017); its plastic zone may reach
     ``plastic_limit`` (share of the hub wall thickness, default 0.3) [-].
+T_min, T_max
+    Lowest and highest ambient temperature of the drive [°C] (``None`` = not given): two more
+    temperature states with shaft and hub both at it (cold start, hot soak).
+
+Operating states
+----------------
+Every temperature state of :func:`state_temperatures` (room temperature of assembly, operating
+temperature, ``T_min``, ``T_max``) is combined with standstill and the operating speed. The
+loosest case is the smallest pressure over all of them, the tightest the largest stress; the
+``state_*`` keys give the code 2·k + (1 at speed) of the state that governs.
 
 Returned keys (arrays broadcast to the common shape; stresses [MPa], forces [N],
 torques [N·mm], temperatures [°C], speeds [rad/s], interferences [mm])
@@ -59,7 +69,7 @@ torques [N·mm], temperatures [°C], speeds [rad/s], interferences [mm])
     effective diametral interference at operating (temperature and speed) and
     at assembly condition (room temperature, standstill);
 ``p_min_op``, ``p_max_op``, ``p_min_asm``, ``p_max_asm``, ``p_min``, ``p_max``
-    contact pressures; ``p_min``/``p_max`` the governing (smallest / largest) of both conditions;
+    contact pressures; ``p_min``/``p_max`` the governing (smallest / largest) over every operating state;
 ``torque_capacity_min``, ``axial_capacity_min``, ``slip_safety_min``
     at ``p_min``, the safety for the vector sum of circumferential and axial friction demand;
 ``hub_sigma_r_bore``, ``hub_sigma_t_bore``, ``hub_stress_max``, ``hub_tresca_max``,
@@ -69,6 +79,9 @@ torques [N·mm], temperatures [°C], speeds [rad/s], interferences [mm])
 ``hub_outer_growth_max``, ``shaft_bore_change_max``
     diametral changes at ``p_max_asm``;
 ``press_force_max``, ``shrink_temperature``, ``loosening_speed``;
+``state_p_min``, ``state_p_max``, ``state_hub``, ``state_shaft``, ``state_loosening``
+    integer code of the governing state (see *Operating states*; the loosening speed names the
+    temperature state, code 2·k);
 ``ok_slip``, ``ok_hub``, ``ok_shaft``, ``ok_speed``, ``ok_heating``, ``ok_press``, ``ok``
     check booleans (elastic-plastic design: ``ok_hub`` = plastic zone within its limit);
 ``plastic_zone_diameter_max``, ``plastic_utilisation``
@@ -102,6 +115,7 @@ OUTPUT_KEYS = (
     "press_force_max", "shrink_temperature", "loosening_speed",
     "ok_slip", "ok_hub", "ok_shaft", "ok_speed", "ok_heating", "ok_press", "ok",
     "plastic_zone_diameter_max", "plastic_utilisation",
+    "state_p_min", "state_p_max", "state_hub", "state_shaft", "state_loosening",
 )
 
 
@@ -120,7 +134,8 @@ def evaluate(*, interference_min, interference_max=None, d, L, di=0.0, Do,
              T_shaft=20.0, T_hub=20.0, T_assembly=20.0, joining_clearance=None,
              yield_safety=1.2, brittle_shaft=False, brittle_hub=False, Rms=np.inf, Rmh=np.inf,
              fracture_safety=2.0, shrink=False, max_heating=np.inf, T_shaft_cooled=None,
-             press_force_limit=np.inf, design="elastic", plastic_limit=0.3) -> dict:
+             press_force_limit=np.inf, T_min=None, T_max=None, design="elastic",
+             plastic_limit=0.3) -> dict:
     r"""Evaluate press or shrink fits: pressures, capacities, stresses, safeties, assembly and checks.
 
     See the module docstring for every argument and returned key with its unit.
@@ -137,7 +152,8 @@ def evaluate(*, interference_min, interference_max=None, d, L, di=0.0, Do,
     * Press-in force F_e = p_max·π·d·L·μ_press at assembly condition.
     * Hub temperature for shrinking: T_0 + (δ_max + s_joint − α_s·d·(T_0 − T_cool))/(α_h·d), with
       the measured (not smoothed) largest interference.
-    * Loosening speed: ω at which p at the loosest interference and operating temperature is 0.
+    * Loosening speed: ω at which p at the loosest interference is 0, the lowest over the
+      temperature states.
 
     Examples
     --------
@@ -176,12 +192,40 @@ def evaluate(*, interference_min, interference_max=None, d, L, di=0.0, Do,
     return {k: v.reshape(shape) for k, v in out.items()}
 
 
+def state_temperatures(T_shaft, T_hub, T_assembly, T_min=None, T_max=None) -> list[tuple]:
+    """(shaft, hub) temperature of each temperature state, in the order of the state codes.
+
+    0 room temperature of assembly (both parts at ``T_assembly``), 1 operating temperature
+    (``T_shaft``, ``T_hub``), then 2 both parts at the lowest ambient ``T_min`` and 3 both at the
+    highest ``T_max`` where given. Each is evaluated at standstill and at operating speed: the state
+    code is ``2·k + 1`` at speed, ``2·k`` at standstill.
+
+    >>> state_temperatures(80.0, 40.0, 20.0, -10.0)
+    [(20.0, 20.0), (80.0, 40.0), (-10.0, -10.0)]
+    """
+    out = [(T_assembly, T_assembly), (T_shaft, T_hub)]
+    if T_min is not None:
+        out.append((T_min, T_min))
+    if T_max is not None:
+        out.append((T_max, T_max))
+    return out
+
+
+def _pick(cur, new, cur_state, code, *, smaller):
+    """(state, value) of the governing state so far: ``new`` replaces ``cur`` where strictly
+    smaller (``smaller=True``) or larger; on a tie the earlier state is kept."""
+    if cur is None:
+        return np.full(np.shape(new), code), new
+    better = new < cur if smaller else new > cur
+    return np.where(better, code, cur_state), np.where(better, new, cur)
+
+
 def _block(*, interference_min, interference_max, d, L, di, Do, Es, nus, alphas, Rps, rhos,
            Eh, nuh, alphah, Rph, rhoh, mu_slip, mu_press, rz_shaft, rz_hub, smoothing,
            torque, axial_force, slip_safety, omega, T_shaft, T_hub, T_assembly,
            joining_clearance, yield_safety, brittle_shaft, brittle_hub, Rms, Rmh,
            fracture_safety, shrink, max_heating, T_shaft_cooled, press_force_limit,
-           design="elastic", plastic_limit=0.3) -> dict:
+           T_min, T_max, design="elastic", plastic_limit=0.3) -> dict:
     """One block of :func:`evaluate`: every argument given (evaluate holds the defaults)."""
     f64 = np.float64
     dmin = np.asarray(interference_min, dtype=f64)
@@ -202,8 +246,8 @@ def _block(*, interference_min, interference_max, d, L, di, Do, Es, nus, alphas,
     qi = di / d
     qi2 = qi * qi
     th = (1.0 + qa2) / (1.0 - qa2)            # hub: sigma_t / p at the bore
-    ts = (1.0 + qi2) / (1.0 - qi2)            # shaft: -sigma_t / p at the surface
-    k = (th + nuh) / Eh + (ts - nus) / Es     # Shigley eq. (3-56), per unit d
+    ts_f = (1.0 + qi2) / (1.0 - qi2)          # shaft: -sigma_t / p at the surface
+    k = (th + nuh) / Eh + (ts_f - nus) / Es     # Shigley eq. (3-56), per unit d
     c_p = 1.0 / (d * k)                       # p = c_p * delta_eff  [MPa/mm]
     hollow = di > 0.0
     g_in = np.where(hollow, 2.0 / (1.0 - qi2), 1.0)  # shaft: |sigma_t| / p at bore (or centre)
@@ -220,30 +264,108 @@ def _block(*, interference_min, interference_max, d, L, di, Do, Es, nus, alphas,
 
     # ---- interference changes -------------------------------------------------------------
     loss_rz = smoothing * (np.asarray(rz_shaft, dtype=f64) + np.asarray(rz_hub, dtype=f64))
-    d_th = d * (alphas * (np.asarray(T_shaft, dtype=f64) - T_assembly)
-                - alphah * (np.asarray(T_hub, dtype=f64) - T_assembly))
     w2 = np.asarray(omega, dtype=f64) ** 2
-    d_w = w2 * c_rot
-    d_op = d_th - d_w                         # total change at operating condition
-
+    spinning = w2 > 0.0
+    # rotation terms only where the joint turns: an infinite hub (Do = inf) at standstill is 0, not 0·inf
+    with np.errstate(invalid="ignore"):
+        d_w = np.where(spinning, w2 * c_rot, 0.0)
+        rot_hub_bore = np.where(spinning, w2 * kh_bore, 0.0)
     de_min_asm = dmin - loss_rz
     de_max_asm = dmax - loss_rz
-    de_min_th = de_min_asm + d_th
-    de_min_op = de_min_th - d_w
-    de_max_op = de_max_asm + d_op
 
-    if design == "elastic-plastic":  # partly plastic hub, DIN 7190-1:2017 (core/elastoplastic.py)
+    rot_sh_surf = np.where(spinning, w2 * ks_surf, 0.0)
+    rot_sh_in = np.where(spinning, w2 * ks_in, 0.0)
+    brittle_h = np.any(brittle_hub)
+    plastic = design == "elastic-plastic"
+
+    # ---- every operating state: temperature state k × (standstill, operating speed) ----------
+    temps = state_temperatures(T_shaft, T_hub, T_assembly, T_min, T_max)
+    states = []                               # (code, k, moving, loosest δ_eff, tightest δ_eff)
+    de_min_ths = []
+    for k, (ts, th_k) in enumerate(temps):
+        d_th = d * (alphas * (np.asarray(ts, dtype=f64) - T_assembly)
+                    - alphah * (np.asarray(th_k, dtype=f64) - T_assembly))
+        de_min_th = de_min_asm + d_th
+        de_min_ths.append(de_min_th)
+        for j, moving in enumerate((False, True)):
+            dw = d_w if moving else 0.0
+            states.append((2 * k + j, k, moving, de_min_th - dw, de_max_asm + d_th - dw))
+    if plastic:  # partly plastic hub, DIN 7190-1:2017 (core/elastoplastic.py): the hub yields at the
+        # largest interference over every state and unloads elastically to each other state
         ep_args = (d, di, Do, Es, nus, Eh, nuh, Rph)
-        _f, p_min_asm, p_min_op, _z = _ep.state_pressures(de_min_asm, de_min_op, *ep_args, first=False)
-        p_max_asm, _a, p_max_op, d_pl = _ep.state_pressures(de_max_asm, de_max_op, *ep_args)
+        peak_lo = np.maximum.reduce([s[3] for s in states])
+        peak_hi = np.maximum.reduce([s[4] for s in states])
+        _n, p_pk_lo, _m, _dl = _ep.state_pressures(peak_lo, peak_lo, *ep_args, first=False)
+        _n, p_pk_hi, _m, d_pl = _ep.state_pressures(peak_hi, peak_hi, *ep_args, first=False)
+        set_lo = np.maximum(peak_lo - p_pk_lo / c_p, 0.0)   # permanent set of the yielded bore
+        k_h = _ep.KAPPA_DIN * Rph
+        p_el = _ep.elastic_limit_pressure(d, Do, Rph)
+
+        def press(de, peak, p_pk):
+            return np.maximum(p_pk - (peak - de) * c_p, 0.0)
+    else:
+        d_pl = d
+        set_lo = 0.0
+
+    p_lo = p_hi = hub_eq = hub_sr = hub_st = shaft_eq = shaft_tr = w_loose = None
+    p_lo_state = p_hi_state = hub_state = shaft_state = loose_state = None
+    p_min_op = p_max_op = de_min_op = de_max_op = None
+    for k, de_min_th in enumerate(de_min_ths):
+        de_free = de_min_th - set_lo if plastic else de_min_th
+        with np.errstate(divide="ignore", invalid="ignore"):
+            wl = np.sqrt(np.maximum(de_free, 0.0) / c_rot)
+        wl = np.where(c_rot > 0.0, wl, np.where(de_free > 0.0, np.inf, 0.0))
+        wl = np.where(np.isnan(wl), 0.0, wl)   # Do = inf: an infinite hub cannot turn
+        loose_state, w_loose = _pick(w_loose, wl, loose_state, 2 * k, smaller=True)
+    for code, k, moving, de_lo, de_hi in states:
+        if plastic:
+            p_l = press(de_lo, peak_lo, p_pk_lo)
+            p_h = press(de_hi, peak_hi, p_pk_hi)
+        else:
+            p_l = np.maximum(de_lo * c_p, 0.0)
+            p_h = np.maximum(de_hi * c_p, 0.0)
+        if k == 1 and moving:
+            de_min_op, de_max_op, p_min_op, p_max_op = de_lo, de_hi, p_l, p_h
+        p_lo_state, p_lo = _pick(p_lo, p_l, p_lo_state, code, smaller=True)
+        p_hi_state, p_hi = _pick(p_hi, p_h, p_hi_state, code, smaller=False)
+        # hub bore at the tightest interference of this state
+        sr = -p_h
+        st_p = np.where(p_h > p_el, k_h - p_h, p_h * th) if plastic else p_h * th
+        st = st_p + (rot_hub_bore if moving else 0.0)
+        vm = np.sqrt(sr * sr + st * st - sr * st)
+        eq = np.where(brittle_hub, st, vm) if brittle_h else vm
+        if hub_eq is None:
+            hub_eq, hub_sr, hub_st, hub_state = eq, sr, st, np.full(np.shape(eq), code)
+        else:
+            better = eq > hub_eq
+            hub_eq, hub_sr, hub_st = (np.where(better, eq, hub_eq), np.where(better, sr, hub_sr),
+                                      np.where(better, st, hub_st))
+            hub_state = np.where(better, code, hub_state)
+        # shaft: inner point (bore or centre; sigma_r = 0 or = sigma_t) and surface
+        st_in = (rot_sh_in if moving else 0.0) - p_h * g_in
+        st_s = (rot_sh_surf if moving else 0.0) - p_h * ts_f
+        sr_s = -p_h
+        vm_s = np.sqrt(sr_s * sr_s + st_s * st_s - sr_s * st_s)
+        s_vm = np.maximum(np.abs(st_in), vm_s)
+        tr_s = np.maximum(np.maximum(np.abs(st_s - sr_s), np.abs(st_s)), p_h)
+        s_tr = np.maximum(np.abs(st_in), tr_s)
+        if np.any(brittle_shaft):
+            s_eq = np.where(brittle_shaft, np.maximum(np.maximum(st_in, st_s), 0.0), s_vm)
+        else:
+            s_eq = s_vm
+        shaft_tr = s_tr if shaft_tr is None else np.maximum(shaft_tr, s_tr)
+        shaft_state, shaft_eq = _pick(shaft_eq, s_eq, shaft_state, code, smaller=False)
+    de_min_asm_out = de_min_asm
+    if plastic:
+        # unloaded room-temperature pressure of the loosest fit; first loading of the tightest
+        # at assembly (it gives the press-in force)
+        p_min_asm = press(de_min_asm, peak_lo, p_pk_lo)
+        p_max_asm = _ep.contact_pressure(de_max_asm, *ep_args)
     else:
         p_min_asm = np.maximum(de_min_asm * c_p, 0.0)
         p_max_asm = np.maximum(de_max_asm * c_p, 0.0)
-        p_min_op = np.maximum(de_min_op * c_p, 0.0)
-        p_max_op = np.maximum(de_max_op * c_p, 0.0)
-        d_pl = d
-    p_min = np.minimum(p_min_op, p_min_asm)
-    p_max = np.maximum(p_max_op, p_max_asm)
+    p_min, p_max = p_lo, p_hi
+    hub_tr = hub_st - hub_sr                  # sigma_t >= 0 >= sigma_r at the bore
 
     # ---- capacity at the loosest case -------------------------------------------------------
     area_mu = np.pi * d * L * mu_slip          # friction force per unit pressure [N/MPa]
@@ -253,48 +375,6 @@ def _block(*, interference_min, interference_max, d, L, di, Do, Es, nus, alphas,
     with np.errstate(divide="ignore", invalid="ignore"):
         s_slip = f_cap / demand
     s_slip = np.where(demand > 0.0, s_slip, np.where(f_cap > 0.0, np.inf, 0.0))
-
-    # ---- stresses at the tightest case -------------------------------------------------------
-    rot_hub_bore = w2 * kh_bore
-    rot_sh_surf = w2 * ks_surf
-    rot_sh_in = w2 * ks_in
-
-    # hub bore: assembly (omega = 0) and operating
-    sr_op = -p_max_op
-    st_op = p_max_op * th + rot_hub_bore
-    st_asm = p_max_asm * th
-    if design == "elastic-plastic":  # plastic bore: sigma_t = sigma_r + k (rotation superposed)
-        k_h = _ep.KAPPA_DIN * Rph
-        th_ep = lambda p: np.where(p > _ep.elastic_limit_pressure(d, Do, Rph), k_h - p, p * th)  # noqa: E731
-        st_op = th_ep(p_max_op) + rot_hub_bore
-        st_asm = th_ep(p_max_asm)
-    if np.any(brittle_hub):
-        hub_eq_asm = np.where(brittle_hub, st_asm, p_max_asm * np.sqrt(1.0 + th + th * th))
-        hub_eq_op = np.where(brittle_hub, st_op, np.sqrt(sr_op * sr_op + st_op * st_op - sr_op * st_op))
-    else:
-        hub_eq_asm = p_max_asm * np.sqrt(1.0 + th + th * th)
-        hub_eq_op = np.sqrt(sr_op * sr_op + st_op * st_op - sr_op * st_op)
-    if design == "elastic-plastic":
-        hub_eq_asm = np.where(brittle_hub, st_asm, np.sqrt(p_max_asm**2 + st_asm**2 + p_max_asm * st_asm))
-    use_op = hub_eq_op >= hub_eq_asm
-    hub_eq = np.where(use_op, hub_eq_op, hub_eq_asm)
-    hub_sr = np.where(use_op, sr_op, -p_max_asm)
-    hub_st = np.where(use_op, st_op, st_asm)
-    hub_tr = hub_st - hub_sr                  # sigma_t >= 0 >= sigma_r at the bore
-
-    # shaft: inner point (bore or centre; sigma_r = 0 or = sigma_t) and surface
-    st_in_op = rot_sh_in - p_max_op * g_in
-    st_s_op = rot_sh_surf - p_max_op * ts
-    sr_s_op = -p_max_op
-    vm_s_op = np.sqrt(sr_s_op * sr_s_op + st_s_op * st_s_op - sr_s_op * st_s_op)
-    shaft_vm = np.maximum(np.maximum(p_max_asm * g_in, np.abs(st_in_op)), vm_s_op)
-    tr_s_op = np.maximum(np.maximum(np.abs(st_s_op - sr_s_op), np.abs(st_s_op)), p_max_op)
-    shaft_tr = np.maximum(np.maximum(p_max_asm * g_in, np.abs(st_in_op)), tr_s_op)
-    if np.any(brittle_shaft):
-        shaft_p1 = np.maximum(np.maximum(st_in_op, st_s_op), 0.0)
-        shaft_eq = np.where(brittle_shaft, shaft_p1, shaft_vm)
-    else:
-        shaft_eq = shaft_vm
 
     hub_strength = np.where(brittle_hub, Rmh, Rph)
     shaft_strength = np.where(brittle_shaft, Rms, Rps)
@@ -312,14 +392,6 @@ def _block(*, interference_min, interference_max, d, L, di, Do, Es, nus, alphas,
     f_press = p_max_asm * (np.pi * d * L * mu_press)
     cool = alphas * d * (np.asarray(T_assembly, dtype=f64) - T_shaft_cooled)
     t_shrink = T_assembly + (dmax + joining_clearance - cool) / (alphah * d)
-    with np.errstate(divide="ignore", invalid="ignore"):
-        w_loose = np.sqrt(np.maximum(de_min_th, 0.0) / c_rot)
-    w_loose = np.where(c_rot > 0.0, w_loose, np.where(de_min_th > 0.0, np.inf, 0.0))
-    if design == "elastic-plastic":  # a yielded bore unloads elastically: contact ends at its set
-        de_free = de_min_th - np.maximum(de_min_asm - p_min_asm / c_p, 0.0)
-        with np.errstate(divide="ignore", invalid="ignore"):
-            w_loose = np.where(c_rot > 0.0, np.sqrt(np.maximum(de_free, 0.0) / c_rot),
-                               np.where(de_free > 0.0, np.inf, 0.0))
 
     ok_slip = (s_slip >= slip_safety) & (p_min > 0.0)
     ok_hub = s_hub >= hub_req
@@ -329,14 +401,14 @@ def _block(*, interference_min, interference_max, d, L, di, Do, Es, nus, alphas,
     else:
         util = np.zeros_like(s_hub)
     ok_shaft = s_shaft >= shaft_req
-    ok_speed = w_loose > np.sqrt(w2)
+    ok_speed = (w_loose > np.sqrt(w2)) | ~spinning
     ok_heating = np.logical_not(shrink) | (t_shrink <= max_heating)
     ok_press = shrink | (f_press <= press_force_limit)
     ok = ok_slip & ok_hub & ok_shaft & ok_speed & ok_heating & ok_press
 
     out = {
         "delta_eff_min_op": de_min_op, "delta_eff_max_op": de_max_op,
-        "delta_eff_min_asm": de_min_asm, "delta_eff_max_asm": de_max_asm,
+        "delta_eff_min_asm": de_min_asm_out, "delta_eff_max_asm": de_max_asm,
         "p_min_op": p_min_op, "p_max_op": p_max_op, "p_min_asm": p_min_asm, "p_max_asm": p_max_asm,
         "p_min": p_min, "p_max": p_max,
         "torque_capacity_min": t_cap, "axial_capacity_min": f_cap, "slip_safety_min": s_slip,
@@ -349,5 +421,7 @@ def _block(*, interference_min, interference_max, d, L, di, Do, Es, nus, alphas,
         "ok_slip": ok_slip, "ok_hub": ok_hub, "ok_shaft": ok_shaft, "ok_speed": ok_speed,
         "ok_heating": ok_heating, "ok_press": ok_press, "ok": ok,
         "plastic_zone_diameter_max": d_pl + 0.0 * p_max, "plastic_utilisation": util,
+        "state_p_min": p_lo_state, "state_p_max": p_hi_state, "state_hub": hub_state,
+        "state_shaft": shaft_state, "state_loosening": loose_state,
     }
     return out

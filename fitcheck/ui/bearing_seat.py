@@ -15,7 +15,7 @@ import streamlit as st
 
 from fitcheck import bearings, checks
 from fitcheck.errors import InputError
-from fitcheck.ui import app, charts, joints, state, unitsys, widgets
+from fitcheck.ui import app, charts, joints, state, unitsys, verdicts, widgets
 from fitcheck.ui.joints import Field
 
 TABLE, PREFIX = "bearing", "br"
@@ -105,6 +105,7 @@ def _results(r: bearings.BearingSeatResult, system: str, name: str) -> None:
         widgets.search_link(TABLE, name)
     st.subheader(f"{widgets.esc(r.designation)}: shaft {widgets.esc(r.shaft_class)}, "
                  f"housing {widgets.esc(r.housing_class)}")
+    verdicts.bearing_clearance(r, system)
     c = st.columns(2)
     c[0].metric("Operating clearance", unitsys.show_range(r.operating_clearance_um, "small_length",
                                                           system, digits=3),

@@ -13,7 +13,7 @@ import streamlit as st
 
 from fitcheck import checks, fits, pressfit
 from fitcheck.errors import InputError
-from fitcheck.ui import app, charts, joints, pressfit_design, state, unitsys, widgets
+from fitcheck.ui import app, charts, joints, pressfit_design, state, unitsys, verdicts, widgets
 from fitcheck.ui.joints import Field
 
 TABLE, PREFIX = "pressfit", "pf"
@@ -105,6 +105,7 @@ def _summary(r: pressfit.PressFitResult, system: str, name: str) -> None:
                            name=name)
     if r.ok:
         widgets.search_link(TABLE, name)
+    verdicts.pressfit_states(r)
     st.subheader(f"{widgets.esc(r.name or 'Joint')}: {widgets.esc(r.fit or 'given interference')}, "
                  f"Ø {unitsys.show(r.diameter, 'length', system)} × "
                  f"{unitsys.show(r.length, 'length', system)}")

@@ -1,0 +1,41 @@
+"""Governing operating state and the clearance verdict by probable combination, for the pages.
+
+Small and self-contained so the pages call it with one line. Computes nothing: it shows the
+fields of :class:`fitcheck.pressfit.PressFitResult` and :class:`fitcheck.bearings.BearingSeatResult`.
+"""
+
+from __future__ import annotations
+
+import math
+
+import streamlit as st
+
+from fitcheck import display
+
+
+def pressfit_states(r) -> None:
+    """The verdict's cause and next step, and the state governing each side of the joint."""
+    if getattr(r, "headline", ""):
+        st.caption(r.headline)
+    if getattr(r, "governing_loose_state", ""):
+        st.caption(f"Loosest: {r.governing_loose_state} · tightest (hub): {r.governing_tight_state} · "
+                   f"loosening speed: {r.loosening_speed_text}")
+
+
+def bearing_clearance(r, system: str) -> None:
+    """Mean clearance (the verdict), the probable range and P(clearance < limit), with its state."""
+    if getattr(r, "headline", ""):
+        st.caption(r.headline)
+    if not math.isfinite(getattr(r, "clearance_mean_um", math.nan)):
+        return
+
+    def um(x):
+        return display.show_small(x / 1000.0, system)
+    c = st.columns(3)
+    c[0].metric("Mean operating clearance", um(r.clearance_mean_um),
+                help=f"every tolerance at its mean; the verdict. Governing state: {r.clearance_state}")
+    c[1].metric("At max. probable interference", um(r.clearance_probable_min_um),
+                help="each seat at mean + ½·√(T_ring² + T_seat²), the group at its mean clearance")
+    c[2].metric(f"P(clearance < {um(r.clearance_min_um)})", f"{100 * r.clearance_probability_below:.1f} %",
+                help=f"σ {um(r.clearance_sigma_um)} ({r.clearance_distribution} bands); worst case "
+                     f"{um(r.clearance_worst_case_um)} (information)")
