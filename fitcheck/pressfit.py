@@ -32,6 +32,7 @@ from dataclasses import dataclass, fields
 import numpy as np
 
 from . import materials as _materials
+from . import shaft as _shaft
 from . import tables
 from .checks import Check
 from .core import lame
@@ -81,6 +82,7 @@ KEYS: dict[str, str] = {
                        "largest principal stress (default 2.0, common practice)",
     "press_force_limit": "force the press can give, e.g. '20 kN' (optional; checked for 'press' assembly)",
 }
+KEYS.update(_shaft.PRESSFIT_KEYS)  # the shaft at the hub edge (DIN 743), fitcheck.shaft
 
 #: (step of the method in words, standard clause or book equation) for the report.
 METHOD_NOTES: list[tuple[str, str]] = [
@@ -111,6 +113,7 @@ METHOD_NOTES: list[tuple[str, str]] = [
     ("Not implemented: elastic-plastic design (hub bore yielding), end effects at the hub faces, "
      "fretting fatigue of the shaft", "DIN 7190-1:2017 (elastic-plastic range)"),
 ]
+METHOD_NOTES.extend(_shaft.METHOD_NOTES)
 
 REF_SLIP = "DIN 7190-1:2017 (transmissible torque and axial force); Shigley, 10th ed., sec. 7-8"
 REF_HUB = "DIN 7190-1:2017 (elastic design, hub bore); von Mises, Shigley, 10th ed., eq. (5-12)"
@@ -218,6 +221,7 @@ def _material_mapping(m: Material):
     out["source"] = m.source
     if m.note:
         out["note"] = m.note
+    out.update(_materials.fatigue_mapping(m))
     return out
 
 
@@ -268,6 +272,7 @@ class PressFitInput:
     yield_safety: float = DEFAULTS["yield_safety"]
     fracture_safety: float = DEFAULTS["fracture_safety"]
     press_force_limit: float | None = None   # [N]
+    shaft_loads: _shaft.ShaftLoads = _shaft.ShaftLoads()  # shaft at the hub edge (DIN 743)
 
     # ------------------------------------------------------------------ reading
     @classmethod
@@ -416,6 +421,7 @@ class PressFitInput:
             if k in v and v[k] > 0.2:
                 errs.add(InputError(f"{field}.{k}", g(k), "a roughness depth of at most 200 um",
                                     "units mixed up?"))
+        v["shaft_loads"] = _shaft.ShaftLoads.from_mapping(mapping, field, errs, _shaft.PRESSFIT_KEYS)
         errs.raise_if_any()
         return cls(**v)
 
@@ -460,6 +466,7 @@ class PressFitInput:
         out["fracture_safety"] = self.fracture_safety
         if self.press_force_limit is not None:
             out["press_force_limit"] = _fmt(self.press_force_limit, "N")
+        out.update(self.shaft_loads.to_mapping())
         return out
 
     # ------------------------------------------------------------------ derived
@@ -609,6 +616,7 @@ class PressFitResult:
     governing_tight_condition: str
     checks: tuple[Check, ...]
     warnings: tuple[str, ...] = ()
+    shaft: _shaft.ShaftSeatResult | None = None  # the shaft at the hub edge (DIN 743)
 
     @property
     def ok(self) -> bool:
@@ -715,6 +723,7 @@ class PressFitResult:
             "checks": [c.to_dict() for c in self.checks],
             "warnings": list(self.warnings),
             "ok": self.ok,
+            **_shaft.json_fields(self.shaft),
         }
 
 
@@ -888,6 +897,11 @@ def evaluate(inp: PressFitInput) -> PressFitResult:
     if Do / d < 1.2:
         warns.append(f"thin hub (Do/d = {Do / d:.2f}): the hub's own stiffness and the plane-stress model "
                      "become uncertain")
+    shaft = _shaft.evaluate_seat(d=d, di=inp.shaft_bore, material=s, rz_um=inp.rz_shaft * 1000.0,
+                                 loads=inp.shaft_loads, torque=inp.torque, axial_force=inp.axial_force,
+                                 temperature=Ts, what="hub", module=inp.module, teeth=inp.teeth)
+    checks.extend(shaft.checks)
+    warns.extend(shaft.warnings)
     for msg in warns:
         warnings.warn(f"{label}: {msg}", MethodRangeWarning, stacklevel=2)
 
@@ -908,5 +922,5 @@ def evaluate(inp: PressFitInput) -> PressFitResult:
         press_force_max=r["press_force_max"], shrink_temperature_C=r["shrink_temperature"],
         joining_clearance=jc, loosening_speed=r["loosening_speed"],
         governing_tight_condition="operating" if tight_op else "assembly",
-        checks=tuple(checks), warnings=tuple(warns),
+        checks=tuple(checks), warnings=tuple(warns) + shaft.notes, shaft=shaft,
     )

@@ -432,7 +432,7 @@ def validity(d, sigma_B_dB, temperature=20.0):
 
 
 def press_fit_seat(*, d, di=0.0, sigma_B_dB, sigma_S_dB, sigma_zdW_dB=None, sigma_bW_dB=None,
-                   tau_tW_dB=None, group="QT", d_eff=None, rz_um=1.0, k_v=1.0,
+                   tau_tW_dB=None, group="QT", d_B=16.0, d_eff=None, rz_um=1.0, k_v=1.0,
                    moment_amplitude=0.0, torque_mean=0.0, torque_amplitude=0.0, axial_mean=0.0,
                    moment_max=None, torque_max=None, axial_max=None, mean_stress_case=2):
     r"""The whole DIN 743 chain for the shaft at the edge of a press-fitted hub (vectorised).
@@ -448,6 +448,9 @@ def press_fit_seat(*, d, di=0.0, sigma_B_dB, sigma_S_dB, sigma_zdW_dB=None, sigm
         ``None``: DIN 743-3 ratios 0.4, 0.5, 0.3 of σ_B(d_B)
     group : str
         K1 group, see :func:`k1`
+    d_B : float
+        Diameter at which the strengths are given [mm] (16 mm in DIN 743-3 for most steels);
+        σ_B(d) = σ_B(d_B)·K1(d_eff)/K1(d_B)
     d_eff : float or ndarray, optional
         Diameter at heat treatment [mm]; ``None`` = d
     rz_um : float or ndarray
@@ -491,6 +494,8 @@ def press_fit_seat(*, d, di=0.0, sigma_B_dB, sigma_S_dB, sigma_zdW_dB=None, sigm
     ----------
     DIN 743-1/-2/-3:2012 (see the module docstring) — from memory.
     """
+    # The same equations as the step functions above, with every logarithm taken once
+    # (lg d, lg σ_B(d), lg Rz): the chain runs on 10⁶-long arrays in a tolerance study.
     d = np.asarray(d, dtype=float)
     di = np.asarray(di, dtype=float)
     sB = np.asarray(sigma_B_dB, dtype=float)
@@ -498,39 +503,61 @@ def press_fit_seat(*, d, di=0.0, sigma_B_dB, sigma_S_dB, sigma_zdW_dB=None, sigm
     s_zdW = RATIO_SIGMA_ZDW * sB if sigma_zdW_dB is None else np.asarray(sigma_zdW_dB, dtype=float)
     s_bW = RATIO_SIGMA_BW * sB if sigma_bW_dB is None else np.asarray(sigma_bW_dB, dtype=float)
     t_tW = RATIO_TAU_TW * sB if tau_tW_dB is None else np.asarray(tau_tW_dB, dtype=float)
-    de = d if d_eff is None else np.asarray(d_eff, dtype=float)
-    K1 = k1(de, group, "tensile")
-    K1y = k1(de, group, "yield")
+    lg_d = _lg(d)
+    try:
+        _, a_t, a_y, d1, d0 = K1_GROUPS[group]
+    except KeyError:
+        raise ValueError(f"K1 group {group!r}; allowed: {', '.join(K1_GROUPS)}") from None
+    lg_de = lg_d if d_eff is None else _lg(np.asarray(d_eff, dtype=float))
+    x1 = np.clip(lg_de, np.log10(d0), np.log10(d1)) - np.log10(d0)      # lg(d_eff/d0), clipped
+    xB = float(np.clip(np.log10(d_B), np.log10(d0), np.log10(d1)) - np.log10(d0))
+    K1 = (1.0 - a_t * x1) / (1.0 - a_t * xB)
+    K1y = (1.0 - a_y * x1) / (1.0 - a_y * xB)
     sB_d = K1 * sB
-    bs, bt = press_fit_notch_factors(d, sB_d)
-    K2 = k2(d)
-    kfs, kft = roughness_factors(rz_um, sB_d)
-    Ksb = total_factor(bs, K2, kfs, k_v)
-    Kszd = total_factor(bs, 1.0, kfs, k_v)
-    Kt = total_factor(bt, K2, kft, k_v)
+    lg_sBd = _lg(sB_d)
+    # notch factors at d_BK and at d (K3 with β(d_BK) for α)
+    lg_bs = np.log10(2.7) + 0.43 * (lg_sBd - 3.0)
+    lg_bt = np.log10(0.65) + lg_bs
+    bs_bk = 10.0 ** lg_bs
+    xd = (np.clip(lg_d, np.log10(7.5), np.log10(150.0)) - np.log10(7.5)) / np.log10(20.0)
+    xbk = (np.log10(D_BK) - np.log10(7.5)) / np.log10(20.0)
+    bs = bs_bk * (1.0 - 0.2 * lg_bs * xbk) / (1.0 - 0.2 * lg_bs * xd)
+    bt = 0.65 * bs_bk * (1.0 - 0.2 * lg_bt * xbk) / (1.0 - 0.2 * lg_bt * xd)
+    K2 = 1.0 - 0.2 * xd
+    kfs = 1.0 - 0.22 * _lg(np.maximum(np.asarray(rz_um, dtype=float), 1.0)) * (lg_sBd - np.log10(20.0) - 1.0)
+    kft = 0.575 * kfs + 0.425
+    Ksb = (bs / K2 + 1.0 / kfs - 1.0) / k_v
+    Kszd = (bs + 1.0 / kfs - 1.0) / k_v
+    Kt = (bt / K2 + 1.0 / kft - 1.0) / k_v
     s_bWK = s_bW * K1 / Ksb
     s_zdWK = s_zdW * K1 / Kszd
     t_tWK = t_tW * K1 / Kt
-    psi_b = psi(s_bWK, K1, sB)
-    psi_zd = psi(s_zdWK, K1, sB)
-    psi_t = psi(t_tWK, K1, sB)
+    two_sBd = 2.0 * sB_d
+    psi_b = s_bWK / (two_sBd - s_bWK)
+    psi_zd = s_zdWK / (two_sBd - s_zdWK)
+    psi_t = t_tWK / (two_sBd - t_tWK)
     # component yield strengths (static proof)
     k2f = np.where(di > 0, 1.0, 1.2)
-    s_bFK = K1y * k2f * sS
     s_zdFK = K1y * sS
-    t_tFK = K1y * k2f * sS / np.sqrt(3.0)
-    # stresses
-    sba, tta, szm = nominal_stresses(d, di, moment_amplitude, torque_amplitude, axial_mean)
-    _, ttm, _ = nominal_stresses(d, di, 0.0, torque_mean, 0.0)
-    smv, tmv = equivalent_mean_stress(szm, 0.0, ttm)
+    s_bFK = k2f * s_zdFK
+    t_tFK = s_bFK / np.sqrt(3.0)
+    # stresses (W_b, W_t = 2 W_b, A computed once)
+    wb = np.pi * (d**4 - di**4) / (32.0 * d)
+    area = np.pi * (d * d - di * di) / 4.0
+    sba = np.asarray(moment_amplitude, dtype=float) / wb
+    tta = np.asarray(torque_amplitude, dtype=float) / (2.0 * wb)
+    ttm = np.asarray(torque_mean, dtype=float) / (2.0 * wb)
+    szm = np.asarray(axial_mean, dtype=float) / area
+    smv = np.sqrt(szm * szm + 3.0 * ttm * ttm)
+    tmv = smv / np.sqrt(3.0)
     term_b = stress_ratio_term(sba, smv, s_bWK, s_bFK, psi_b, mean_stress_case)
     term_t = stress_ratio_term(tta, tmv, t_tWK, t_tFK, psi_t, mean_stress_case)
     S_f = fatigue_safety(0.0, term_b, term_t)
     m_max = moment_amplitude if moment_max is None else moment_max
     t_max = np.abs(np.asarray(torque_mean, dtype=float)) + torque_amplitude if torque_max is None else torque_max
     f_max = axial_mean if axial_max is None else axial_max
-    sbx, ttx, szx = nominal_stresses(d, di, m_max, t_max, f_max)
-    S_s = static_safety(np.abs(szx), np.abs(sbx), np.abs(ttx), s_zdFK, s_bFK, t_tFK)
+    S_s = static_safety(np.abs(np.asarray(f_max, dtype=float)) / area, np.abs(np.asarray(m_max, dtype=float)) / wb,
+                        np.abs(np.asarray(t_max, dtype=float)) / (2.0 * wb), s_zdFK, s_bFK, t_tFK)
     return {
         "K1": K1, "K1_yield": K1y, "sigma_B_d": sB_d, "beta_sigma": bs, "beta_tau": bt, "K2": K2,
         "KF_sigma": kfs, "KF_tau": kft, "K_sigma_b": Ksb, "K_sigma_zd": Kszd, "K_tau": Kt,
