@@ -41,6 +41,7 @@ import numpy as np
 from . import materials, threads
 from .checks import Check, all_passed
 from .core import vdi2230 as core
+from .core import vdi2230_eccentric as ecc
 from .errors import ErrorCollector, InputError, MethodRangeWarning, did_you_mean
 from .materials import Material
 from .units import number, temperature_c, to_core
@@ -91,6 +92,26 @@ KEYS: dict[str, str] = {
                             "screw spacing of the pattern (a single screw: a wide plate)",
     "rolled_after_heat_treatment": "thread rolled after heat treatment (higher fatigue limit): true/false; "
                                    "default false",
+    "clamp_eccentricity": "eccentric clamping s_sym: distance of the screw axis from the centre line of the "
+                          "interface strip, positive towards the load side [length]; default 0 (VDI 2230-1 "
+                          "eccentric joint, step R3)",
+    "load_eccentricity": "eccentric loading a: distance of the axial load's line of action from the centre line "
+                         "of the interface strip, on the load side [length]; default 0, or half the interface "
+                         "depth (the load at the interface's edge) for a cover under tilt with "
+                         "interface_depth given",
+    "interface_depth": "depth c_T of the interface strip across the bending axis, e.g. the width of the "
+                       "flange land [length]; required for an eccentric joint",
+    "interface_width": "width b of the interface strip of one screw along the bending axis [length]; default "
+                       "the screw spacing of the pattern (clamp_outer_diameter)",
+    "gasket_thickness": "thickness of a flat gasket or seal in the interface [length]; no gasket unless given",
+    "gasket_modulus": "compression modulus of the gasket [stress], e.g. '400 MPa' (or give gasket_stiffness)",
+    "gasket_stiffness": "load–deflection stiffness of the gasket under one screw [stiffness], e.g. '80000 N/mm'",
+    "gasket_settling": "settling (creep relaxation) of the gasket in service [small length], added to embedding; "
+                       "default 0 um",
+    "gasket_seating_pressure": "least surface pressure the gasket needs to seal [stress]; checked against the "
+                               "smallest residual clamp load when given",
+    "gasket_area": "sealed (gasket) area of the whole cover [area], e.g. '1800 mm**2'; shared by the screws",
+    "gasket_alpha": "thermal expansion coefficient of the gasket [1/K]; default 0 (not counted)",
 }
 
 #: Calculation steps in words with the clause or equation they follow, for the report.
@@ -147,6 +168,31 @@ METHOD_NOTES: list[tuple[str, str]] = [
      "VDI 2230-1:2015, step R9"),
 ]
 
+#: Method steps of the eccentric joint and of a gasket, added to a report when they apply.
+ECCENTRIC_NOTES: list[tuple[str, str]] = [
+    ("Eccentric joint: clamped parts as a beam of bending compliance βP = Σ li/(Ei·IBers), IBers = b·cT³/12 "
+     "(interface strip of width b and depth cT; the narrower cone under the head is not subtracted); "
+     "δP* = δP + s_sym²·βP, δP** = δP + a·s_sym·βP; Φen* = n·δP**/(δS + δP*) replaces Φn in every step",
+     "VDI 2230-1:2015, 3.2.2, 5.1.2.3, 5.3.1, step R3"),
+    ("Opening at the loaded edge U (u = cT/2 on the load side, also the far edge): interface area AD and "
+     "moment IBT of the strip less the hole; FKab = FA·(a − s_sym)·u/(IBT/AD + s_sym·u) is added to the "
+     "required clamp load; opening limit FAab = FV,min/((1 − Φen*) + (a − s_sym)·u/(IBT/AD + s_sym·u)) "
+     "with FV,min the smallest preload in service; check FA ≤ FAab",
+     "VDI 2230-1:2015, 3.2.3, step R2"),
+    ("Bending of the screw through the clamped parts' rotation: σSAb = Φen*·FA/AS + FA·(a − s_sym·Φen*)·"
+     "(lK/lers)·(ES/EP)·dS/(2·IBers), lers = Σ li·(dS/di)⁴ over the screw's elastic lengths; the stress "
+     "amplitude of the fatigue check is σSAb/2 (load cycling between 0 and FA); valid while the joint "
+     "stays closed", "VDI 2230-1:2015, 5.1.1.2, 5.5.x, step R9"),
+]
+
+GASKET_NOTES: list[tuple[str, str]] = [
+    ("Gasket: a layer of the clamped stack at the interface (tapped: above the housing; through: below the "
+     "first part) with its compression modulus in the deformation cone, or with the modulus that makes "
+     "its cone section as compliant as the load–deflection stiffness given; its settling is added to "
+     "the embedding fZ; sealing: FKR,min/(A/n) ≥ the seating pressure, A the sealed area of the cover",
+     "VDI 2230-1:2015, 5.1.2.2 (layered clamped parts), 5.4.2.1 (embedding), step R2 (FKP)"),
+]
+
 _STEEL_WASHER_E = 205000.0       # MPa, steel washer 200 HV (common practice)
 _STEEL_WASHER_ALPHA = 11.5e-6    # 1/K (common practice)
 _TAU_RATIO_SCREW = 0.6           # τB/Rm of screw steels (common practice; VDI 2230-1 Table A9 ~0.6)
@@ -162,6 +208,105 @@ class Layer:
     thickness: float
     material: Material
     spec: object = field(compare=False, default=None)
+
+
+@dataclass(frozen=True)
+class Gasket:
+    """A flat gasket or seal in the interface, in core units.
+
+    Attributes: thickness [mm]; modulus [MPa] or stiffness [N/mm per screw] (one of the two);
+    settling [mm]; seating_pressure [MPa] with area [mm², the whole cover's sealed area];
+    alpha [1/K].
+    """
+
+    thickness: float
+    modulus: float | None = None
+    stiffness: float | None = None
+    settling: float = 0.0
+    seating_pressure: float | None = None
+    area: float | None = None
+    alpha: float = 0.0
+
+    def to_mapping(self) -> dict:
+        """The ``gasket_*`` keys of a ``[[screws]]`` table (strings with units)."""
+        out: dict = {"gasket_thickness": f"{self.thickness!r} mm"}
+        if self.modulus is not None:
+            out["gasket_modulus"] = f"{self.modulus!r} MPa"
+        if self.stiffness is not None:
+            out["gasket_stiffness"] = f"{self.stiffness!r} N/mm"
+        out["gasket_settling"] = f"{self.settling * 1000.0!r} um"
+        if self.seating_pressure is not None:
+            out["gasket_seating_pressure"] = f"{self.seating_pressure!r} MPa"
+        if self.area is not None:
+            out["gasket_area"] = f"{self.area!r} mm**2"
+        out["gasket_alpha"] = f"{self.alpha!r} 1/K"
+        return out
+
+
+_GASKET_KEYS = ("thickness", "modulus", "stiffness", "settling", "seating_pressure", "area", "alpha")
+
+
+def _gasket_keys(m, get, field, errs) -> Gasket | None:
+    """The ``gasket_*`` keys as a :class:`Gasket`, or None when no gasket is given."""
+    given = [k for k in _GASKET_KEYS if f"gasket_{k}" in m]
+    if not given:
+        return None
+    if "thickness" not in given:
+        errs.add(InputError(f"{field}.gasket_thickness", None, "the gasket's thickness, e.g. '0.5 mm' "
+                            f"(gasket_{given[0]} is given)"))
+        return None
+    if ("modulus" in given) == ("stiffness" in given):
+        errs.add(InputError(f"{field}.gasket_modulus", m.get("gasket_modulus", m.get("gasket_stiffness")),
+                            "either gasket_modulus (e.g. '400 MPa') or gasket_stiffness (per screw, e.g. "
+                            "'80000 N/mm'): exactly one of the two"))
+        return None
+    kinds = {"thickness": ("length", dict(lo=0.0, lo_open=True, hi=50.0)),
+             "modulus": ("stress", dict(lo=0.0, lo_open=True, hi=5e5)),
+             "stiffness": ("stiffness", dict(lo=0.0, lo_open=True, hi=1e9)),
+             "settling": ("small_length", dict(lo=0.0, hi=2000.0)),
+             "seating_pressure": ("stress", dict(lo=0.0, lo_open=True, hi=1e4)),
+             "area": ("area", dict(lo=0.0, lo_open=True, hi=1e8)),
+             "alpha": ("expansion", dict(lo=-1e-3, hi=1e-3))}
+    g = {k: get(f"gasket_{k}", lambda x, key, kind=kinds[k][0], kw=kinds[k][1]: to_core(x, kind, key, **kw))
+         for k in given}
+    if any(v is None for v in g.values()):
+        return None
+    if "seating_pressure" in g and "area" not in g:
+        errs.add(InputError(f"{field}.gasket_area", None, "the sealed area of the cover (e.g. '1800 mm**2') "
+                            "to check gasket_seating_pressure"))
+        return None
+    return Gasket(g["thickness"], g.get("modulus"), g.get("stiffness"), g.get("settling", 0.0) / 1000.0,
+                  g.get("seating_pressure"), g.get("area"), g.get("alpha", 0.0))
+
+
+def _eccentric_keys(m, v, get, field, errs) -> None:
+    """Parse the keys of the eccentric joint and refuse geometry the method does not cover."""
+    for key in ("clamp_eccentricity", "load_eccentricity"):
+        v[key] = get(key, lambda x, k: to_core(x, "length", k, lo=-1e4, hi=1e4))
+    for key in ("interface_depth", "interface_width"):
+        v[key] = get(key, lambda x, k: to_core(x, "length", k, lo=0.0, lo_open=True, hi=1e5))
+    if v["load_eccentricity"] is not None and v["load_eccentricity"] < 0:
+        errs.add(InputError(f"{field}.load_eccentricity", m.get("load_eccentricity"),
+                            "a distance ≥ 0 (the load side defines the positive direction)"))
+    eccentric = bool(v["clamp_eccentricity"]) or bool(v["load_eccentricity"])
+    if eccentric and v["interface_depth"] is None:
+        errs.add(InputError(f"{field}.interface_depth", None, "the depth of the interface strip across the "
+                            "bending axis (e.g. the flange land, '12 mm'), needed by the eccentric joint"))
+        return
+    c = v["interface_depth"]
+    if c is None:
+        return
+    for key in ("clamp_eccentricity", "load_eccentricity"):
+        e = v[key]
+        if e is not None and abs(e) >= c / 2.0:
+            errs.add(InputError(f"{field}.{key}", m.get(key), f"a distance inside the interface strip, "
+                                f"|e| < interface_depth/2 = {c / 2.0:g} mm"))
+    s = v["clamp_eccentricity"] or 0.0
+    if abs(s) > c / 6.0:
+        errs.add(InputError(f"{field}.clamp_eccentricity", m.get("clamp_eccentricity"),
+                            f"a screw axis inside the core of the interface, |s_sym| ≤ interface_depth/6 = "
+                            f"{c / 6.0:g} mm (further out the preload alone opens the far edge, and the "
+                            "eccentric model of VDI 2230-1 no longer applies)"))
 
 
 def _mat_spec_out(spec, mat: Material):
@@ -210,6 +355,11 @@ class ScrewJointInput:
     shank_length: float = 0.0
     clamp_outer_diameter: float | None = None
     rolled_after_heat_treatment: bool = False
+    clamp_eccentricity: float | None = None
+    load_eccentricity: float | None = None
+    interface_depth: float | None = None
+    interface_width: float | None = None
+    gasket: Gasket | None = None
 
     # ------------------------------------------------------------------ parsing
     @classmethod
@@ -355,6 +505,8 @@ class ScrewJointInput:
         v["clamp_outer_diameter"] = get("clamp_outer_diameter",
                                         lambda x, k: to_core(x, "length", k, lo=0.0, lo_open=True))
         v["rolled_after_heat_treatment"] = get("rolled_after_heat_treatment", _bool, False)
+        _eccentric_keys(m, v, get, field, errs)
+        v["gasket"] = _gasket_keys(m, get, field, errs)
         if th is not None and "head" in v:
             _geometry_checks(th, v, m, field, errs)
         errs.raise_if_any()
@@ -395,6 +547,11 @@ class ScrewJointInput:
         })
         if self.clamp_outer_diameter is not None:
             out["clamp_outer_diameter"] = f"{self.clamp_outer_diameter!r} mm"
+        for key in ("clamp_eccentricity", "load_eccentricity", "interface_depth", "interface_width"):
+            if getattr(self, key) is not None:
+                out[key] = f"{getattr(self, key)!r} mm"
+        if self.gasket is not None:
+            out.update(self.gasket.to_mapping())
         return out
 
 
@@ -577,6 +734,14 @@ class ScrewJointResult:
     k_exponential_shigley: float
     checks: tuple[Check, ...]
     warnings: tuple[str, ...] = ()
+    load_factor_eccentric: float = math.nan
+    load_factor_concentric: float = math.nan
+    bending_stress: float = 0.0
+    opening_force: float = math.inf
+    clamp_for_opening: float = 0.0
+    opening_edge: str = ""
+    beta_P: float = 0.0
+    gasket_pressure: float = math.nan
 
     @property
     def ok(self) -> bool:
@@ -608,11 +773,12 @@ class ScrewJointResult:
         """
         th_loss = max(0.0, -self.dF_th_cold, -self.dF_th_warm)
         F_V = max(self.F_M_zul / self.alpha_A - self.F_Z - th_loss, 0.0)
-        dF_S = self.load_factor * self.F_A
+        phi = self.load_factor_eccentric if math.isfinite(self.load_factor_eccentric) else self.load_factor
+        dF_S = phi * self.F_A
         return {"F_V": F_V, "f_S": F_V * self.delta_S, "f_P": F_V * self.delta_P,
                 "F_S": F_V + dF_S, "f_A": dF_S * self.delta_S,
-                "F_KR": F_V - (1.0 - self.load_factor) * self.F_A, "F_A": self.F_A,
-                "F_M_zul": self.F_M_zul}
+                "F_KR": F_V - (1.0 - phi) * self.F_A, "F_A": self.F_A,
+                "F_M_zul": self.F_M_zul, "F_Aab": self.opening_force}
 
     def to_dict(self) -> dict:
         """Every figure under a name with its unit, the checks and the verdict (JSON-ready)."""
@@ -644,6 +810,10 @@ class ScrewJointResult:
             "fatigue_safety": self.fatigue_safety,
             "clamp_stiffness_shigley_frustum_N_per_mm": self.k_frustum_shigley,
             "clamp_stiffness_shigley_exponential_N_per_mm": self.k_exponential_shigley,
+            "load_factor_eccentric": self.load_factor_eccentric,
+            "bending_stress_MPa": self.bending_stress, "opening_force_N": self.opening_force,
+            "clamp_for_opening_N": self.clamp_for_opening, "opening_edge": self.opening_edge,
+            "gasket_pressure_MPa": self.gasket_pressure,
             "warnings": list(self.warnings),
             "checks": [c.to_dict() for c in self.checks], "ok": self.ok,
         }
@@ -696,6 +866,54 @@ def _limits_for(mat: Material, what: str) -> tuple[float, float]:
                       f"({mat.group}) from data/screw_clamped_limits.csv is used", MethodRangeWarning,
                       stacklevel=3)
     return pG, tau
+
+
+def _eccentric(inp, x, y, t, E, l_K, D_A, dh, th, pc, delta_S, delta_P, n, k_head, k_nut, l_shank):
+    """The eccentric joint's geometry and load factor, or None for a concentric joint.
+
+    Active when clamp_eccentricity or load_eccentricity is not zero, or for a cover under a tilting
+    moment whose interface_depth is given (then the load line defaults to the interface's edge on
+    the load side, a = cT/2, the least favourable place inside the strip).
+    """
+    tilt = inp.tilting_moment > 0 and inp.count >= 3
+    s_sym = inp.clamp_eccentricity or 0.0
+    a = inp.load_eccentricity
+    where = ""
+    if tilt:
+        i, ang = ecc.tilt_direction(x, y, inp.tilting_moment)
+        where = f"screw {i + 1} of {inp.count} ({ang:.0f}° from the pattern's x axis), the most loaded by the tilt"
+    if not (s_sym or a):
+        if not (tilt and inp.interface_depth is not None):
+            if tilt:
+                warnings.warn("cover under a tilting moment: its most loaded screw is treated as concentric; "
+                              "give interface_depth (and clamp_eccentricity/load_eccentricity) for the eccentric "
+                              "joint of VDI 2230-1, which usually raises the load factor and adds bending",
+                              MethodRangeWarning, stacklevel=4)
+            return None
+    c_T = inp.interface_depth
+    if a is None:
+        a = c_T / 2.0 if tilt else 0.0
+    if inp.interface_width is not None:
+        b = inp.interface_width
+    elif math.isfinite(D_A):
+        b = D_A
+    else:
+        raise InputError("interface_width", None, "the width of the interface strip of this single screw along "
+                         "the bending axis (no pattern gives a screw spacing), e.g. '20 mm'")
+    I_Bers = float(ecc.substitute_inertia(b, c_T))
+    beta_P = ecc.bending_compliance(t, E, I_Bers)
+    A_D, I_BT = (float(v) for v in ecc.interface_section(b, c_T, dh, s_sym))
+    if A_D <= 0 or I_BT <= 0:
+        raise InputError("interface_depth", f"{c_T:g} mm", f"an interface strip ({b:g} mm × {c_T:g} mm) larger "
+                         f"than the clearance hole ({dh:g} mm)")
+    phi = float(ecc.load_factor_eccentric(n, delta_S, delta_P, beta_P, s_sym, a))
+    E_P = l_K / float(np.sum(np.asarray(t) / np.asarray(E)))
+    l_ers = ecc.screw_bending_length(
+        [k_head * th.d, l_shank, l_K - l_shank, 0.5 * th.d, k_nut * th.d],
+        [th.d, th.d, th.d3, th.d3, th.d], th.ds)
+    return {"phi": phi, "s": s_sym, "a": a, "b": b, "c_T": c_T, "I_Bers": I_Bers, "beta_P": beta_P,
+            "A_D": A_D, "I_BT": I_BT, "E_P": E_P, "l_ers": l_ers, "edges": (c_T / 2.0, -c_T / 2.0),
+            "where": where}
 
 
 def evaluate(inp: ScrewJointInput) -> ScrewJointResult:
@@ -761,6 +979,16 @@ def _evaluate(inp: ScrewJointInput) -> ScrewJointResult:
         al = [_STEEL_WASHER_ALPHA, *al]
         n_parts += 1
         bearing_d, bearing_dh = w.d2, max(dh, w.d1)
+    i_gasket = None
+    if inp.gasket is not None:
+        # the gasket sits in the interface: above the tapped housing, or below the first part of a
+        # through-bolted stack; a stiffness given per screw sets its modulus once the cone is known
+        i_gasket = len(t) if tapped else (2 if inp.washer else 1)
+        g = inp.gasket
+        t.insert(i_gasket, g.thickness)
+        E.insert(i_gasket, g.modulus if g.modulus is not None else 1.0)
+        al.insert(i_gasket, g.alpha)
+        n_parts += 1
     t = np.array(t, float)
     E = np.array(E, float)
     al = np.array(al, float)
@@ -785,6 +1013,10 @@ def _evaluate(inp: ScrewJointInput) -> ScrewJointResult:
     delta_S = float(parts[-1])
     tphi = float(core.tan_phi(l_K, hd.dw, D_A, tapped))
     D_A_Gr = float(core.limiting_diameter(hd.dw, l_K, tphi, tapped))
+    if i_gasket is not None and inp.gasket.stiffness is not None:
+        unit = core.clamp_compliance(z_top, z_bot, np.where(np.arange(t.size) == i_gasket, 1.0, E),
+                                     hd.dw, dh, D_A, tphi, tapped, l_K)
+        E[i_gasket] = float(unit[i_gasket]) * inp.gasket.stiffness
     delta_P = float(np.sum(core.clamp_compliance(z_top, z_bot, E, hd.dw, dh, D_A, tphi, tapped, l_K)))
     # Shigley's frustum (30°, hole = bolt diameter as in the book) and its exponential fit
     d_P_sh = float(np.sum(core.clamp_compliance(z_top, z_bot, E, hd.dw, th.d, D_A if math.isfinite(D_A)
@@ -793,6 +1025,10 @@ def _evaluate(inp: ScrewJointInput) -> ScrewJointResult:
     k_exp = float(core.member_stiffness_exponential(E_eq, th.d, l_K))
     n = inp.load_introduction
     phi = float(core.load_factor(n, delta_S, delta_P))
+    phi_concentric = phi
+    ex = _eccentric(inp, x, y, t, E, l_K, D_A, dh, th, pc, delta_S, delta_P, n, k_head, k_nut, l_shank)
+    if ex is not None:
+        phi = ex["phi"]   # Φen* replaces Φn in every later step (VDI 2230-1:2015, R3)
 
     # --- embedding
     load = "shear" if F_Q > 0 else "axial"
@@ -800,6 +1036,8 @@ def _evaluate(inp: ScrewJointInput) -> ScrewJointResult:
     n_faces = 1 if tapped else 2
     n_inter = (n_parts if tapped else n_parts - 1)
     f_Z = f_thread + n_faces * f_face + n_inter * f_inter
+    if inp.gasket is not None:
+        f_Z += inp.gasket.settling
     F_Z = float(core.embedding_loss(f_Z, delta_S, delta_P))
 
     # --- temperature
@@ -813,7 +1051,11 @@ def _evaluate(inp: ScrewJointInput) -> ScrewJointResult:
 
     # --- required and permissible preloads
     F_KQ = F_Q / (inp.slip_interfaces * inp.mu_interface) if F_Q > 0 else 0.0
-    F_K_req = max(inp.clamp_force_required, F_KQ)
+    F_Kab = 0.0
+    if ex is not None:
+        F_Kab = max(0.0, *(float(ecc.clamp_to_prevent_opening(F_A, ex["a"], ex["s"], u, ex["A_D"], ex["I_BT"]))
+                           for u in ex["edges"]))
+    F_K_req = max(inp.clamp_force_required + F_Kab, F_KQ)
     if isinstance(inp.tightening, str):
         alpha_A = threads.tightening_factor(inp.tightening)[1]
     else:
@@ -860,8 +1102,24 @@ def _evaluate(inp: ScrewJointInput) -> ScrewJointResult:
         L_min = float(core.min_engagement(th.As, pc.Rm, _TAU_RATIO_SCREW * pc.Rm, tauB_M,
                                           th.d, th.d2, th.P)[0]) * _ENGAGEMENT_MARGIN
 
+    # --- eccentric joint: opening limit and bending of the screw
+    sig_bend = 0.0
+    F_V_min = F_M_zul / alpha_A - F_Z - th_loss
+    F_Aab = math.inf if phi >= 1.0 else max(F_V_min, 0.0) / (1.0 - phi)
+    opening_edge = ""
+    if ex is not None:
+        lims = [float(ecc.opening_limit(max(F_V_min, 0.0), phi, ex["a"], ex["s"], u, ex["A_D"], ex["I_BT"]))
+                for u in ex["edges"]]
+        F_Aab = min(lims)
+        opening_edge = ("the edge on the load side" if lims[0] <= lims[1] else "the edge away from the load")
+        if ex["where"]:
+            opening_edge += f", at {ex['where']}"
+        _, sb = ecc.screw_stress_eccentric(F_A, phi, ex["a"], ex["s"], l_K, ex["l_ers"], pc.E, ex["E_P"],
+                                           th.ds, ex["I_Bers"])
+        sig_bend = float(sb)
+
     # --- fatigue (load cycling between 0 and F_A)
-    sigma_a = phi * F_A / (2.0 * th.As)
+    sigma_a = phi * F_A / (2.0 * th.As) + sig_bend / 2.0
     if inp.rolled_after_heat_treatment:
         # mean screw force at the largest preload in service (after embedding): the lower, safe limit
         F_Sm = F_M_zul - F_Z + 0.5 * phi * F_A
@@ -893,12 +1151,25 @@ def _evaluate(inp: ScrewJointInput) -> ScrewJointResult:
                             f"housing {inp.housing_material.name}"))
     if F_A > 0:
         checks.append(Check("fatigue of the thread", S_D, _FATIGUE_SAFETY, ">=", "", "VDI 2230-1:2015, R9",
-                            f"σa = {sigma_a:.1f} MPa against σAS = {sigma_AS:.1f} MPa"))
+                            f"σa = {sigma_a:.1f} MPa against σAS = {sigma_AS:.1f} MPa"
+                            + (f" (bending share {sig_bend / 2.0:.1f} MPa)" if ex is not None else "")))
+    if ex is not None:
+        checks.append(Check("no opening at the loaded edge", F_A, F_Aab, "<=", "N",
+                            "VDI 2230-1:2015, 3.2.3, step R2",
+                            f"opening limit FAab at FV,min = {F_V_min:.0f} N; opens first at {opening_edge}; "
+                            f"Φen* = {phi:.3f} (s_sym = {ex['s']:g} mm, a = {ex['a']:g} mm)"))
+    gasket_p = math.nan
+    if inp.gasket is not None and inp.gasket.seating_pressure is not None:
+        gasket_p = F_KR / (inp.gasket.area / inp.count)
+        checks.append(Check("gasket sealing pressure", gasket_p, inp.gasket.seating_pressure, ">=", "MPa",
+                            "VDI 2230-1:2015, step R2 (FKP)",
+                            f"smallest residual clamp load {F_KR:.0f} N on {inp.gasket.area / inp.count:.0f} "
+                            "mm² of gasket per screw"))
 
     return ScrewJointResult(
         name=inp.name, thread=th.designation, property_class=pc.name, d=th.d, P=th.P, d2=th.d2, d3=th.d3,
         As=th.As, Rp02=pc.Rp02, Rm=pc.Rm, dw=hd.dw, dh=dh, l_K=l_K, D_A=float(D_A), tan_phi=tphi,
-        D_A_Gr=D_A_Gr, delta_S=delta_S, delta_P=delta_P, load_introduction=n, load_factor=phi, F_A=F_A,
+        D_A_Gr=D_A_Gr, delta_S=delta_S, delta_P=delta_P, load_introduction=n, load_factor=phi_concentric, F_A=F_A,
         F_Q=F_Q, f_Z=f_Z, F_Z=F_Z, dF_th_cold=dF_cold, dF_th_warm=dF_warm, F_K_required=F_K_req,
         F_KQ_required=F_KQ, alpha_A=alpha_A, F_M_zul=F_M_zul, F_M_min=F_M_min, F_M_max=F_M_max,
         tightening_torque=M_A, tightening_torque_mu_max=M_A_hi, preload_at_mu_max=F_at_mu_max,
@@ -906,4 +1177,11 @@ def _evaluate(inp: ScrewJointInput) -> ScrewJointResult:
         surface_pressure=p, p_G=pG, surface_pressure_nut=p_nut, p_G_nut=pG_nut,
         engagement=inp.engagement if inp.engagement is not None else math.nan, engagement_min=L_min,
         sigma_a=sigma_a, sigma_AS=sigma_AS, fatigue_safety=S_D, k_frustum_shigley=1.0 / d_P_sh,
-        k_exponential_shigley=k_exp, checks=tuple(checks))
+        k_exponential_shigley=k_exp, checks=tuple(checks), load_factor_eccentric=phi,
+        load_factor_concentric=phi_concentric, bending_stress=sig_bend, opening_force=F_Aab,
+        clamp_for_opening=F_Kab, opening_edge=opening_edge,
+        beta_P=ex["beta_P"] if ex is not None else 0.0, gasket_pressure=gasket_p)
+
+
+METHOD_NOTES += [(f"{step} (where the joint is eccentric or has a gasket)", ref)
+                 for step, ref in ECCENTRIC_NOTES + GASKET_NOTES]

@@ -63,6 +63,7 @@ CORE: dict[str, str] = {
     "compliance": "mm/N",
     "dimensionless": "",
     "angle": "rad",
+    "area": "mm**2",
 }
 
 _DIMS = {
@@ -81,6 +82,7 @@ _DIMS = {
     "compliance": "[length] / [force]",
     "dimensionless": "",
     "angle": "",
+    "area": "[length] ** 2",
 }
 
 _EXAMPLES = {
@@ -99,6 +101,7 @@ _EXAMPLES = {
     "compliance": "'4e-6 mm/N'",
     "dimensionless": "a plain number",
     "angle": "'30 deg'",
+    "area": "'1800 mm**2' or '2.8 in**2'",
 }
 
 

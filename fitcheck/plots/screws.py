@@ -11,7 +11,9 @@ def plot_joint_diagram(result, ax=None) -> Figure:
     The screw line rises with stiffness 1/δS to the smallest preload in service
     F_V = F_M,zul/αA − F_Z − (thermal loss); the clamped parts' line falls from there with 1/δP. The operating
     load F_A is shared: the screw takes Φ·F_A, the clamped parts are relieved by (1 − Φ)·F_A, and
-    F_KR is the residual clamp load (VDI 2230-1:2015, Section 3.1, joint diagram).
+    F_KR is the residual clamp load (VDI 2230-1:2015, Section 3.1, joint diagram). For an eccentric
+    joint the load factor is Φen* and the point where the interface starts to open at the loaded
+    edge (F_A = F_Aab) is marked.
 
     Parameters
     ----------
@@ -41,6 +43,14 @@ def plot_joint_diagram(result, ax=None) -> Figure:
         ax.hlines(FKR / 1000, fS, fS + df, color="tab:green", lw=1, ls=":")
         ax.annotate(f"FKR = {FKR / 1000:.2f} kN", (fS + df, FKR / 1000), textcoords="offset points",
                     xytext=(6, -12), fontsize=8, color="tab:green")
+    F_Aab = j.get("F_Aab", float("inf"))
+    if getattr(r, "opening_edge", "") and F_Aab == F_Aab and F_Aab < float("inf"):
+        # opening of the interface at the loaded edge (VDI 2230-1:2015, 3.2.3): the screw force there
+        phi = r.load_factor_eccentric
+        xo, yo = fS + phi * F_Aab * r.delta_S * 1000.0, (FV + phi * F_Aab) / 1000
+        ax.plot([fS, xo], [FV / 1000, yo], color="tab:purple", lw=1, ls=":")
+        ax.plot([xo], [yo], marker="o", color="tab:purple", ls="none",
+                label=f"opening at FAab = {F_Aab / 1000:.2f} kN")
     ax.axhline(r.F_M_zul / 1000, color="grey", lw=0.8, ls="--")
     ax.annotate(f"FM,zul = {r.F_M_zul / 1000:.2f} kN", (0, r.F_M_zul / 1000), textcoords="offset points",
                 xytext=(2, 3), fontsize=8, color="grey")
@@ -48,9 +58,14 @@ def plot_joint_diagram(result, ax=None) -> Figure:
                 xytext=(-70, 4), fontsize=8)
     ax.set_xlabel("elongation / compression [µm]")
     ax.set_ylabel("force [kN]")
-    ax.set_title(f"Joint diagram: {r.name} ({r.thread} {r.property_class}), Φ = {r.load_factor:.3f}")
+    phi_used = getattr(r, "load_factor_eccentric", r.load_factor)
+    phi_text = (f"Φen* = {phi_used:.3f}" if getattr(r, "opening_edge", "") else f"Φ = {r.load_factor:.3f}")
+    ax.set_title(f"Joint diagram: {r.name} ({r.thread} {r.property_class}), {phi_text}")
     ax.set_xlim(left=0)
-    ax.set_ylim(bottom=0, top=max(r.F_M_zul, j["F_S"]) / 1000 * 1.15)
+    top = max(r.F_M_zul, j["F_S"])
+    if getattr(r, "opening_edge", "") and F_Aab < float("inf"):
+        top = max(top, FV + r.load_factor_eccentric * F_Aab)
+    ax.set_ylim(bottom=0, top=top / 1000 * 1.15)
     ax.legend(fontsize=8, loc="upper right")
     ax.grid(True, alpha=0.3)
     return fig
