@@ -66,7 +66,8 @@ FORMAT_VERSION = 1
 
 __all__ = [
     "CaseCheck", "CaseResult", "DesignCase", "ENGINES", "Engine", "EngineUnavailable",
-    "FORMAT_VERSION", "JointResult", "Title", "demo_case", "demo_text", "dumps", "engine",
+    "FORMAT_VERSION", "JointResult", "Title", "demo_case", "demo_text", "document_text", "dumps",
+    "engine",
     "evaluate", "load", "loads", "save",
 ]
 
@@ -216,6 +217,10 @@ class DesignCase:
     screws: tuple = ()
     names: dict = field(default_factory=dict)
     format_version: int = FORMAT_VERSION
+    unit_system: str = "SI"
+    #: The TOML text the case was read from (None for a case built in code). Saving writes the
+    #: changes into this text, so the user's comments, key order and formatting stay.
+    source_text: str | None = field(default=None, compare=False, repr=False)
 
     def joints(self) -> Iterator[tuple[Engine, str, object]]:
         """Every joint as ``(engine, name, input)`` in file order by kind."""
@@ -248,7 +253,8 @@ def joint_label(table: str, name: str) -> str:
 def load(path: str | os.PathLike) -> DesignCase:
     """Read and validate a case file (at most 1 MiB); every problem is reported at once."""
     data = read_toml(path)
-    return from_document(data, source=str(path))
+    case = from_document(data, source=str(path))
+    return dataclasses.replace(case, source_text=Path(path).read_text(encoding="utf-8-sig"))
 
 
 def loads(text: str | bytes, source: str = "case file") -> DesignCase:
@@ -260,7 +266,8 @@ def loads(text: str | bytes, source: str = "case file") -> DesignCase:
         data = read_toml_bytes(raw, source)
     except UnicodeEncodeError:  # pragma: no cover - lone surrogates in a str
         raise InputError(source, "text with invalid characters", "UTF-8 TOML text") from None
-    return from_document(data, source=source)
+    case = from_document(data, source=source)
+    return dataclasses.replace(case, source_text=raw.decode("utf-8-sig"))
 
 
 def from_document(data: Mapping, source: str = "case file") -> DesignCase:
@@ -270,13 +277,15 @@ def from_document(data: Mapping, source: str = "case file") -> DesignCase:
         raise InputError(source, type(data).__name__, "a TOML table")
     _check_version(data, source)
 
-    allowed_top = ("format_version", "title", "conditions", *ENGINES)
+    allowed_top = ("format_version", "unit_system", "title", "conditions", *ENGINES)
+    _check_limits(data, allowed_top)
     for key in data:
         if key not in allowed_top:
             errs.add(InputError(key, _show(data[key]), "a top-level key or table: "
                                 + ", ".join(allowed_top), did_you_mean(key, allowed_top)))
 
     title = _read_title(data.get("title", {}), errs)
+    unit_system = _read_unit_system(data.get("unit_system", "SI"), errs)
 
     # the engines this file uses (imported lazily, only these)
     used: dict[str, Engine] = {}
@@ -353,8 +362,50 @@ def from_document(data: Mapping, source: str = "case file") -> DesignCase:
         names[table] = tuple(got_names)
 
     errs.raise_if_any()
-    return DesignCase(title=title, conditions=conditions, names=names,
+    return DesignCase(title=title, conditions=conditions, names=names, unit_system=unit_system,
                       **{k: tuple(v) for k, v in inputs.items()})
+
+
+def check_limits(data: Mapping) -> None:
+    """Refuse a parsed case document whose counts, lengths or characters exceed what the schema
+    allows (:mod:`fitcheck.inputlimits`), before any value is read; the loader does this first."""
+    _check_limits(data, ("format_version", "unit_system", "title", "conditions", *ENGINES))
+
+
+def _check_limits(data: Mapping, allowed_top: tuple[str, ...]) -> None:
+    """Counts, lengths and characters as the schema allows, before any value is read."""
+    from .inputlimits import DEFAULT_KEYS, check_case
+
+    tables = {}
+    for table, eng in ENGINES.items():
+        if table in data:
+            try:
+                tables[table] = eng.keys()
+            except EngineUnavailable:  # reported by the loader; no schema to count against
+                tables[table] = ("name", *(f"_{i}" for i in range(DEFAULT_KEYS)))
+    known = set(CONDITION_KEYS)
+    for keys in tables.values():
+        known.update(keys)
+    errs = check_case(data, tables, allowed_top, TITLE_KEYS, known)
+    if len(errs) == 1:
+        raise errs[0]
+    if errs:
+        raise InputErrors(errs)
+
+
+#: Values of the top-level key ``unit_system``: the units of the report, plots and CLI text.
+UNIT_SYSTEMS = ("SI", "inch")
+
+
+def _read_unit_system(v, errs: ErrorCollector) -> str:
+    """``unit_system = "SI" | "inch"`` (case-insensitive; "si", "Inch" accepted and normalised)."""
+    if isinstance(v, str):
+        for u in UNIT_SYSTEMS:
+            if v.strip().lower() == u.lower():
+                return u
+    errs.add(InputError("unit_system", _show(v), "'SI' or 'inch'",
+                        did_you_mean(str(v), list(UNIT_SYSTEMS))))
+    return "SI"
 
 
 def _check_version(data: Mapping, source: str) -> None:
@@ -458,10 +509,12 @@ def _scope_errors(fld: str, v) -> list[InputError]:
         return []
     if not isinstance(v, str) or not v.strip()[:1].lstrip("+-.").isdigit():
         return []
-    from .units import Q_
+    from .qparse import quantity_or_none
 
     try:
-        q = Q_(v.strip())
+        q = quantity_or_none(v)
+        if q is None:  # text outside the quantity grammar: the engine refuses it in its own words
+            return []
         spec = SCOPE_LIMITS.get(str(q.dimensionality))
         if spec is None:
             return []
@@ -514,6 +567,8 @@ def _count(v) -> int:
 def to_document(case: DesignCase) -> dict:
     """The case as a plain TOML document (what :func:`dumps` writes)."""
     doc: dict = {"format_version": FORMAT_VERSION}
+    if getattr(case, "unit_system", "SI") != "SI":
+        doc["unit_system"] = case.unit_system
     title = case.title.to_mapping()
     if title:
         doc["title"] = title
@@ -536,10 +591,12 @@ def _same_value(a, b) -> bool:
         return True
     if not (isinstance(a, str) and isinstance(b, str)):
         return False
-    from .units import Q_
+    from .qparse import quantity_or_none
 
     try:
-        qa, qb = Q_(a), Q_(b)
+        qa, qb = quantity_or_none(a), quantity_or_none(b)
+        if qa is None or qb is None:
+            return False
         return qa.dimensionality == qb.dimensionality and math.isclose(
             float(qa.to(qb.units).magnitude), float(qb.magnitude), rel_tol=1e-12, abs_tol=1e-12)
     except Exception:  # pint raises several unrelated types for text it cannot read
@@ -552,16 +609,150 @@ def _reads_back(eng: Engine, name: str, inp, table: Mapping, conditions: Mapping
     mapping = {k: v for k, v in table.items() if k != "name" or "name" in eng.load().KEYS}
     inherited = {k: v for k, v in conditions.items() if k in keys and k not in table}
     try:
-        return eng.input_type().from_mapping({**inherited, **mapping}, joint_label(eng.table, name)) == inp
+        with warnings.catch_warnings():
+            warnings.simplefilter("ignore")
+            return eng.input_type().from_mapping({**inherited, **mapping},
+                                                 joint_label(eng.table, name)) == inp
     except (InputError, InputErrors):
         return False
 
 
+HEADER = ("# fitcheck design case (format_version 1). Engineering estimate: verify by test;\n"
+          "# the applicable standards, local codes and licensed professional practice govern.\n")
+
+
 def dumps(case: DesignCase) -> str:
-    """The case as TOML text; :func:`loads` of it gives an equal case."""
-    header = ("# fitcheck design case (format_version 1). Engineering estimate: verify by test;\n"
-              "# the applicable standards, local codes and licensed professional practice govern.\n")
-    return header + tomlwrite.dumps(to_document(case))
+    """The case as TOML text; :func:`loads` of it gives an equal case.
+
+    A case read from a file (``case.source_text``) is written as that text with
+    only the changed values rewritten: comments, blank lines, key order and the
+    user's spelling of every unchanged value stay (:func:`fitcheck.tomlwrite.update`).
+    A new case gets a header with the caution and the layout of
+    :func:`fitcheck.tomlwrite.dumps`.
+
+    Raises
+    ------
+    InputError, InputErrors
+        When the text would not load back as this very case (a value :func:`load`
+        refuses, or one that would read back differently): nothing is written then.
+    """
+    if case.source_text is not None:
+        text = tomlwrite.update(case.source_text, _document_against(case), same=_same_written)
+    else:
+        text = HEADER + tomlwrite.dumps(to_document(case))
+    _verify(case, text)
+    return text
+
+
+def document_text(doc: Mapping, source_text: str | None = None, header: str = HEADER) -> str:
+    """TOML text of a case document (the mapping a case file parses to), as the browser saves it.
+
+    The document is checked as :func:`load` checks a file first: a value the loader refuses
+    raises (:class:`~fitcheck.errors.InputErrors`) and nothing is produced. With the text
+    the document was read from (``source_text``) only the changed values are rewritten in it;
+    otherwise a new text begins with ``header``.
+    """
+    from_document(doc, source="the case to be saved")
+    if source_text is not None:
+        try:
+            text = tomlwrite.update(source_text, doc, same=_same_written)
+        except Exception:  # text that is no longer TOML: write the document afresh
+            text = header + tomlwrite.dumps(doc)
+    else:
+        text = header + tomlwrite.dumps(doc)
+    from_document(read_toml_bytes(text.encode("utf-8"), "the case to be saved"))
+    return text
+
+
+def _verify(case: DesignCase, text: str) -> None:
+    """Refuse a text that does not load back as ``case`` (so it is never written)."""
+    again = loads(text, source="the case to be saved")
+    if again != case:
+        diff = [f.name for f in dataclasses.fields(case)
+                if f.compare and getattr(again, f.name) != getattr(case, f.name)]
+        raise InputError("case", ", ".join(diff) or "the case",
+                         "values that read back unchanged from the case file",
+                         "the case holds a value the file cannot express; nothing was written")
+
+
+def _same_written(a, b) -> bool:
+    """Two values of a case file say the same (the text of ``a`` is then kept)."""
+    if isinstance(a, bool) or isinstance(b, bool):
+        return a is b
+    if isinstance(a, int | float) and isinstance(b, int | float):
+        return float(a) == float(b)
+    return _same_value(a, b)
+
+
+def _document_against(case: DesignCase) -> dict:
+    """The document to write for a case read from a file: the file's own values wherever they still hold.
+
+    Title and conditions take the file's text for values that are the same quantity;
+    each joint table keeps its own keys and values and changes only those that no
+    longer read back to the joint's input (smallest change: every changed key is
+    tried back at its old value, or left out, and kept so when the joint reads the same).
+    """
+    import tomllib
+
+    new = to_document(case)
+    try:
+        old = tomllib.loads(case.source_text or "")
+    except tomllib.TOMLDecodeError:
+        return new
+    for k, v in old.items():  # top-level keys this writer does not produce (kept as they are)
+        if k not in new and k not in ENGINES and k not in ("title", "conditions", "format_version"):
+            new[k] = v
+    if isinstance(old.get("format_version"), int):
+        new["format_version"] = old["format_version"]
+    for part in ("title", "conditions"):
+        o, n = old.get(part), new.get(part)
+        if isinstance(o, Mapping) and isinstance(n, Mapping):
+            new[part] = {k: (o[k] if k in o and _same_written(o[k], v) else v) for k, v in n.items()}
+    conditions = case.conditions
+    for eng, name, inp in case.joints():
+        olds = old.get(eng.table)
+        if not isinstance(olds, list):
+            continue
+        entry = next((e for e in olds if isinstance(e, Mapping)
+                      and isinstance(e.get("name"), str) and e["name"].strip() == name), None)
+        if entry is None:
+            continue
+        entries = new[eng.table]
+        for i, e in enumerate(entries):
+            if e.get("name") == name:
+                entries[i] = _smallest_change(eng, name, inp, dict(entry), conditions)
+    return new
+
+
+def _smallest_change(eng: Engine, name: str, inp, old: dict, conditions: Mapping) -> dict:
+    if _reads_back(eng, name, inp, old, conditions):
+        return old
+    full = {"name": old.get("name", name)}
+    full.update((k, v) for k, v in inp.to_mapping().items() if k != "name" and v is not None)
+    cand, changed = dict(old), []
+    for k, v in full.items():
+        if k in old and _same_written(old[k], v):
+            continue
+        if k not in old and k in conditions and _same_written(conditions[k], v):
+            continue
+        cand[k] = v
+        changed.append(k)
+    for k in old:
+        if k not in full:
+            del cand[k]
+            changed.append(k)
+    if not _reads_back(eng, name, inp, cand, conditions):
+        return full
+    for k in changed:
+        trial = dict(cand)
+        if k in old:
+            trial[k] = old[k]
+        else:
+            trial.pop(k, None)
+        if _reads_back(eng, name, inp, trial, conditions):
+            cand = trial
+    order = [k for k in old if k in cand] + [k for k in cand if k not in old]
+    return {k: cand[k] for k in order}
 
 
 def save(case: DesignCase, path: str | os.PathLike) -> Path:
@@ -572,7 +763,7 @@ def save(case: DesignCase, path: str | os.PathLike) -> Path:
     point leaves the old file as it was and no temporary file behind.
     """
     target = Path(path)
-    data = dumps(case).encode("utf-8")
+    data = dumps(case).encode("utf-8")  # checked: it loads back as this case, or nothing is written
     folder = target.parent if str(target.parent) else Path(".")
     fd, tmp = tempfile.mkstemp(prefix=f".{target.name}.", suffix=".tmp", dir=folder)
     try:
@@ -725,18 +916,29 @@ def evaluate(case: DesignCase) -> CaseResult:
 # --------------------------------------------------------------------------- demo
 
 DEMO_RESOURCE = "benchtop_pump.toml"
+INCH_DEMO_RESOURCE = "lab_winch.toml"
 
 
-def demo_text() -> str:
-    """The demo case file (gearhead of a benchtop pump) as TOML text."""
-    return importlib.resources.files("fitcheck.demo").joinpath(DEMO_RESOURCE).read_text("utf-8")
+def demo_text(inch: bool = False) -> str:
+    """The demo case file as TOML text: the gearhead of a benchtop pump (SI), or with
+    ``inch=True`` the gearhead of a small lab winch in inch units (ASME B4.1 fits, UNC screws)."""
+    name = INCH_DEMO_RESOURCE if inch else DEMO_RESOURCE
+    return importlib.resources.files("fitcheck.demo").joinpath(name).read_text("utf-8")
 
 
-def demo_case() -> DesignCase:
-    """The demo case: the gearhead of a benchtop pump (invented, realistic values)."""
-    return loads(demo_text(), source=f"fitcheck/demo/{DEMO_RESOURCE}")
+def demo_case(inch: bool = False) -> DesignCase:
+    """The demo case (invented, realistic values); ``inch=True`` for the lab-winch gearhead in inch."""
+    name = INCH_DEMO_RESOURCE if inch else DEMO_RESOURCE
+    return loads(demo_text(inch), source=f"fitcheck/demo/{name}")
 
 
 def replace(case: DesignCase, **changes) -> DesignCase:
-    """A copy of the case with some fields changed (``dataclasses.replace``)."""
-    return dataclasses.replace(case, **changes)
+    """A copy of the case with some fields changed (``dataclasses.replace``), checked as :func:`load` checks a file.
+
+    The copy is written to TOML text and read back; a value the loader refuses
+    raises here (:class:`~fitcheck.errors.InputError` / ``InputErrors`` naming the
+    field), so a case that :func:`save` could write is always one :func:`load` reads.
+    """
+    new = dataclasses.replace(case, **changes)
+    dumps(new)  # raises for a value load refuses or one the file cannot express
+    return new

@@ -61,15 +61,17 @@ _SMALL = {"um", "micrometer", "micrometre", "micron", "µm", "uin", "microinch"}
 def num(x: float, digits: int = 4) -> str:
     """A number with ``digits`` significant digits, in plain notation where that stays readable.
 
-    >>> num(15742.3), num(0.000315, 3), num(-8.268), num(2.0), num(1.5e9)
-    ('15740', '0.000315', '-8.268', '2', '1.5e+09')
+    Never in e-notation and never "-0" (a value that rounds to zero reads "0").
+
+    >>> num(15742.3), num(0.000315, 3), num(-8.268), num(2.0), num(1.5e9), num(-1e-9), num(2e-7)
+    ('15740', '0.000315', '-8.268', '2', '1500000000', '-0.000000001', '0.0000002')
     """
     x = float(x)
-    if x == 0 or not math.isfinite(x):
+    if x == 0:
+        return "0"
+    if not math.isfinite(x):
         return f"{x:g}"
     e = math.floor(math.log10(abs(x)))
-    if e >= 7 or e < -5:
-        return f"{x:.{digits}g}"
     r = round(x, digits - 1 - e)
     dec = max(digits - 1 - e, 0)
     text = f"{r:.{dec}f}"
@@ -149,9 +151,10 @@ def convert_text(text: str, system: str) -> str:
     """
     if not isinstance(text, str) or not text.strip():
         return text
-    try:
-        q = ureg.Quantity(text.strip().replace("·", "*"))
-    except Exception:
+    from .qparse import quantity_or_none
+
+    q = quantity_or_none(text)  # never pint on text outside the quantity grammar
+    if q is None:
         return text
     if not hasattr(q, "units") or q.dimensionless:
         return text
@@ -225,3 +228,177 @@ def margin_text(m: float | None, loaded: bool = True) -> str:
         return "> 10×"
     text = f"{m * 100:+.1f} %"
     return "0.0 %" if text in ("+0.0 %", "-0.0 %") else text
+
+
+# ------------------------------------------------------------------------------------------
+# Inch drawing practice: sizes to 0.0001 in (four places), tolerances and small lengths to
+# 0.00001 in or in thousandths of an inch, forces to the pound, stresses in psi/ksi,
+# temperatures to the degree Fahrenheit.                                    # common practice
+
+def inch_size(value_mm: float) -> str:
+    """A size held in mm shown as an inch drawing gives it, four places: ``1.0000 in``.
+
+    >>> inch_size(25.4), inch_size(12.66698)
+    ('1.0000 in', '0.4987 in')
+    """
+    if value_mm is None or not math.isfinite(float(value_mm)):
+        return "—"
+    return f"{float(Q_(float(value_mm), 'mm').to('in').magnitude):.4f} in"
+
+
+def thou(value_um: float, signed: bool = False) -> str:
+    """A small length held in µm shown in thousandths of an inch (0.01 thou steps).
+
+    >>> thou(48.26), thou(-15.24, signed=True), thou(0.0)
+    ('1.9 thou', '-0.6 thou', '0 thou')
+    """
+    if value_um is None or not math.isfinite(float(value_um)):
+        return "—"
+    v = round(float(Q_(float(value_um), "um").to("in").magnitude) * 1000.0, 2)
+    text = f"{v:+.2f}" if signed else f"{v:.2f}"
+    text = text.rstrip("0").rstrip(".") if "." in text else text
+    return ("0" if text in ("+0", "-0", "") else text) + " thou"
+
+
+_PROSE = None
+_UNITS_RE = r"(mm|µm|um|N·mm|N·m|N\*m|kN|N|MPa|°C|degC)"
+_NUM_RE = r"([-+]?\d+(?:\.\d+)?(?:e[-+]?\d+)?)"
+
+
+def _prose_re():
+    global _PROSE
+    if _PROSE is None:
+        import re
+        _PROSE = (re.compile(rf"(?<![\w.]){_NUM_RE}(\s?(?:…|\.\.\.|to)\s?){_NUM_RE}(\s?){_UNITS_RE}(?![\w²³/·*])"),
+                  re.compile(rf"(?<![\w.]){_NUM_RE}(\s?){_UNITS_RE}(?![\w²³/·*])"))
+    return _PROSE
+
+
+def inch_value(v: float, unit: str, column: bool = False) -> tuple[str, str] | None:
+    """A printed SI value and its unit in inch practice: ``(number text, unit symbol)``.
+
+    Sizes (mm) to four places of an inch, small lengths (µm, and mm below 0.1) in
+    thousandths of an inch, forces in lbf, stresses in ksi (psi below 1 ksi), torques in
+    lbf·in, temperatures to the °F; None for a unit this does not convert. With
+    ``column=True`` (a table column shares one unit) mm are always inches and MPa always ksi.
+
+    >>> inch_value(25.4, "mm"), inch_value(12.7, "um"), inch_value(100.0, "N·m")
+    (('1.0000', 'in'), ('0.5', 'thou'), ('885.1', 'lbf·in'))
+    """
+    v = float(v)
+    if not math.isfinite(v):
+        return None
+    if unit == "mm":
+        if column or abs(v) >= 0.1 or v == 0:
+            return inch_size(v)[:-3], "in"
+        return thou(v * 1000.0)[:-5], "thou"
+    if unit in ("µm", "um"):
+        return thou(v)[:-5], "thou"
+    if unit in ("N", "kN"):
+        return num(float(Q_(v, unit).to("lbf").magnitude), 4), "lbf"
+    if unit == "MPa":
+        p = float(Q_(v, "MPa").to("psi").magnitude)
+        return (num(p / 1000.0, 4), "ksi") if (column or abs(p) >= 1000) else (num(p, 3), "psi")
+    if unit in ("N·m", "N·mm", "N*m"):
+        return num(float(Q_(v, unit.replace("·", "*")).to("lbf*in").magnitude), 4), "lbf·in"
+    if unit in ("°C", "degC"):
+        return f"{float(Q_(v, 'degC').to('degF').magnitude):.0f}", "°F"
+    return None
+
+
+def text_in_system(text: str, system: str) -> str:
+    """Rewrite the quantities of a printed text ("12.7 mm", "850 N", "45 MPa", "20 °C") in the
+    units of ``system``, rounded as an inch drawing or report shows them; SI text is returned as is.
+
+    Only "number unit" pairs (and ranges "a … b unit") are rewritten, so a number printed
+    without its unit is never relabelled.
+
+    >>> text_in_system("d = 25.4 mm, δ = 12.7 … 38.1 um, F = 4448.2 N, p = 68.95 MPa at 20 °C", "inch")
+    'd = 1.0000 in, δ = 0.5 … 1.5 thou, F = 1000 lbf, p = 10 ksi at 68 °F'
+    """
+    if system != "inch" or not isinstance(text, str):
+        return text
+    rng, one = _prose_re()
+
+    def sub_range(m):
+        a, b = inch_value(float(m[1]), m[5]), inch_value(float(m[3]), m[5])
+        if a is None or b is None or a[1] != b[1]:
+            return m[0]
+        return f"{a[0]}{m[2]}{b[0]} {a[1]}"
+
+    def sub(m):
+        r = inch_value(float(m[1]), m[3])
+        return m[0] if r is None else f"{r[0]} {r[1]}"
+
+    return one.sub(sub, rng.sub(sub_range, text))
+
+
+def table_in_system(headers: list[str], rows: list[list], system: str) -> tuple[list[str], list[list]]:
+    """Convert a printed table: columns headed ``name [unit]`` and (value, unit) column pairs.
+
+    >>> table_in_system(["case", "δ [um]"], [["a", "12.7"]], "inch")
+    (['case', 'δ [thou]'], [['a', '0.5']])
+    """
+    import re
+    if system != "inch":
+        return headers, rows
+    headers, rows = list(headers), [list(r) for r in rows]
+    for j, h in enumerate(headers):
+        m = re.fullmatch(r"(.*)\[(.+)\]\s*", str(h))
+        if not m:
+            continue
+        unit = m[2].strip()
+        new_unit = None
+        for r in rows:
+            cell = str(r[j])
+            pair = re.fullmatch(r"\s*([-+]?[\d.]+(?:e[-+]?\d+)?)\s*…\s*([-+]?[\d.]+(?:e[-+]?\d+)?)\s*", cell)
+            if pair:
+                a, b = (inch_value(float(x), unit, column=True) for x in pair.groups())
+                if a is None or b is None:
+                    break
+                plus = cell.strip().startswith("+")
+                pa = "+" if plus and float(pair[1]) >= 0 else ""
+                pb = "+" if plus and float(pair[2]) >= 0 else ""
+                r[j], new_unit = f"{pa}{a[0]} … {pb}{b[0]}", a[1]
+                continue
+            try:
+                got = inch_value(float(cell.replace("+", "")), unit, column=True)
+            except ValueError:
+                continue
+            if got is None:
+                break
+            r[j], new_unit = got[0], got[1]
+        if new_unit:
+            headers[j] = f"{m[1]}[{new_unit}]"
+    low = [str(h).strip().lower() for h in headers]
+    if "unit" in low and "value" in low:
+        iu, iv = low.index("unit"), low.index("value")
+        for r in rows:
+            try:
+                got = inch_value(float(str(r[iv])), str(r[iu]).strip())
+            except ValueError:
+                continue
+            if got is not None:
+                r[iv], r[iu] = got
+    return headers, rows
+
+
+_UNIT_WORDS = (("delta_degC", "K"), ("delta_degF", "°F"), ("degC", "°C"), ("degF", "°F"),
+          ("N*mm", "N·mm"), ("N*m", "N·m"), ("lbf*in", "lbf·in"), ("kg/m**3", "kg/m³"),
+          ("mm**2", "mm²"), ("in**2", "in²"), ("micrometer", "µm"), ("um", "µm"))
+
+
+def words(text: str) -> str:
+    """Unit spellings of input text as people write them: ``'default 2.5 um'`` -> ``'default 2.5 µm'``.
+
+    Only whole unit words after a number or a space are rewritten (``'sum'`` stays ``'sum'``).
+
+    >>> words("default 20 degC, 2.5 um, 3 N*m")
+    'default 20 °C, 2.5 µm, 3 N·m'
+    """
+    import re
+
+    out = str(text)
+    for a, b in _UNIT_WORDS:
+        out = re.sub(r"(?<=[\d\s(])" + re.escape(a) + r"(?![A-Za-z*])", b, out)
+    return out

@@ -11,6 +11,35 @@ from __future__ import annotations
 import difflib
 from collections.abc import Iterable
 
+#: Problems listed one by one in an :class:`InputErrors` message (the rest are counted).
+MAX_LISTED = 50
+#: Longest shown form of a value in a message; longer values are cut and their length given.
+MAX_SHOWN = 120
+#: Names longer than this get no "did you mean" (the comparison grows with the square of the length).
+MAX_SUGGEST = 64
+
+
+def _short(value: object, limit: int = MAX_SHOWN, quote: bool = True) -> str:
+    """``repr(value)`` (or ``str`` with ``quote=False``) cut to about ``limit`` characters.
+
+    Control characters and bidi overrides show escaped, since ``repr`` escapes what is not
+    printable; a long value is cut and its length named.
+
+    >>> _short("x" * 500, 20)
+    "'xxxxxxxxxxxxxxxx…' (500 characters)"
+    """
+    if isinstance(value, str) and len(value) > limit:
+        head = value[: max(limit - 4, 1)]
+        text = repr(head) if quote else head
+        return (text[:-1] + "…" + text[-1:] if quote else text + "…") + f" ({len(value)} characters)"
+    if isinstance(value, list | tuple | dict) and len(value) > 20:
+        kind = "table" if isinstance(value, dict) else "array"
+        return f"an {kind} of {len(value)} items" if kind == "array" else f"a table of {len(value)} keys"
+    text = repr(value) if quote else str(value)
+    if len(text) > limit:
+        return text[: limit - 1] + "…"
+    return text
+
 
 class FitcheckError(Exception):
     """Base class of every error fitcheck raises on purpose."""
@@ -46,7 +75,7 @@ class InputError(FitcheckError, ValueError):
 
     @property
     def message(self) -> str:
-        msg = f"{self.field}: got {self.value!r}; allowed: {self.allowed}"
+        msg = f"{_short(self.field, 200, quote=False)}: got {_short(self.value)}; allowed: {self.allowed}"
         if self.hint:
             msg += f" ({self.hint})"
         return msg
@@ -68,7 +97,10 @@ class InputErrors(FitcheckError, ValueError):
     def message(self) -> str:
         n = len(self.errors)
         head = f"{n} problem{'s' if n != 1 else ''} in the input"
-        return head + ":\n" + "\n".join(f"  - {e.message}" for e in self.errors)
+        shown = [f"  - {e.message}" for e in self.errors[:MAX_LISTED]]
+        if n > MAX_LISTED:
+            shown.append(f"  - … and {n - MAX_LISTED} more")
+        return head + ":\n" + "\n".join(shown)
 
 
 class MethodRangeWarning(UserWarning):
@@ -81,6 +113,8 @@ def did_you_mean(word: str, choices: Iterable[str], n: int = 3) -> str:
     >>> did_you_mean("C45", ["C45E", "42CrMo4", "16MnCr5"])
     "did you mean 'C45E'?"
     """
+    if len(str(word)) > MAX_SUGGEST:
+        return ""
     choices = list(choices)
     lowered = {c.lower(): c for c in choices}
     close = difflib.get_close_matches(str(word).lower(), list(lowered), n=n, cutoff=0.5)

@@ -17,6 +17,9 @@ import math
 import re
 from dataclasses import dataclass
 
+import numpy as np
+
+from .core import ansi_b41 as _a
 from .core import iso286 as _k
 from .errors import InputError, did_you_mean
 from .tables import read_rows
@@ -24,8 +27,8 @@ from .units import to_core
 
 MM_PER_IN = 25.4
 
-__all__ = ["Designation", "Fit", "PreferredFit", "Zone", "deviations", "fit", "parse",
-           "preferred_fits", "valid_classes", "zone"]
+__all__ = ["Designation", "Fit", "PreferredFit", "Zone", "ansi_classes", "ansi_deviations", "ansi_fit",
+           "deviations", "fit", "parse", "preferred_fits", "valid_classes", "zone"]
 
 _DESIG_RE = re.compile(
     r"""^\s*(?:[Øø⌀∅]|dia\.?)?\s*
@@ -33,7 +36,8 @@ _DESIG_RE = re.compile(
         (?:\s*(?P<unit>mm|inches|inch|in|")(?=\s|/|$))?
         \s*(?P<rest>.*?)\s*$""", re.X)
 _TOKEN_RE = re.compile(r"^([A-Za-z]{1,2})(\d{1,2})$")
-_EXAMPLE = "a nominal size and one or two classes, e.g. '25 H7/p6', '25 H7', '25 p6' or '1 in H7/h6'"
+_EXAMPLE = ("a nominal size and one or two classes, e.g. '25 H7/p6', '25 H7', '25 p6' or '1 in H7/h6', "
+            "or an ASME B4.1 class, e.g. '1 in FN2'")
 
 
 @dataclass(frozen=True)
@@ -50,6 +54,8 @@ class Designation:
         The nominal size was given in inch.
     text : str
         The text as given.
+    ansi : str or None
+        An ASME B4.1 class of fit (``"FN2"``) instead of ISO 286 classes.
     """
 
     nominal_mm: float
@@ -57,6 +63,7 @@ class Designation:
     shaft: str | None
     inch: bool
     text: str
+    ansi: str | None = None
 
 
 @dataclass(frozen=True)
@@ -109,10 +116,10 @@ class Zone:
             "max_mm": self.max_mm,
             "min_mm": self.min_mm,
             "it_um": self.it_um,
-            "upper_in": self.upper_um / 1000.0 / MM_PER_IN,
-            "lower_in": self.lower_um / 1000.0 / MM_PER_IN,
-            "max_in": self.max_mm / MM_PER_IN,
-            "min_in": self.min_mm / MM_PER_IN,
+            "upper_in": round(self.upper_um / 1000.0 / MM_PER_IN, 10),
+            "lower_in": round(self.lower_um / 1000.0 / MM_PER_IN, 10),
+            "max_in": round(self.max_mm / MM_PER_IN, 10),
+            "min_in": round(self.min_mm / MM_PER_IN, 10),
         }
 
 
@@ -133,6 +140,10 @@ class Fit:
     clearance_min_um: float
     mean_clearance_um: float
     fit_tolerance_um: float
+    system: str = "ISO 286"
+    ansi_class: str | None = None
+    source: str = "ISO 286-1:2010 / ISO 286-2:2010 tables (data/iso286_*.csv)"
+    from_memory: bool = False
 
     @property
     def interference_min_um(self) -> float:
@@ -146,6 +157,8 @@ class Fit:
 
     @property
     def designation(self) -> str:
+        if self.ansi_class:
+            return f"{_a_size(self.nominal_mm):g} in {self.ansi_class}"
         classes = "/".join(z.cls for z in (self.hole, self.shaft) if z is not None)
         return f"{self.nominal_mm:g} {classes}"
 
@@ -164,6 +177,12 @@ class Fit:
             "fit_tolerance_um": self.fit_tolerance_um,
             "interference_min_um": self.interference_min_um,
             "interference_max_um": self.interference_max_um,
+            "clearance_max_in": round(self.clearance_max_um / 1000.0 / MM_PER_IN, 10),
+            "clearance_min_in": round(self.clearance_min_um / 1000.0 / MM_PER_IN, 10),
+            "system": self.system,
+            "ansi_class": self.ansi_class,
+            "source": self.source,
+            "from_memory": self.from_memory,
         }
 
 
@@ -230,7 +249,7 @@ def parse(text: str) -> Designation:
     Examples
     --------
     >>> parse("Ø25 H7/p6")
-    Designation(nominal_mm=25.0, hole='H7', shaft='p6', inch=False, text='Ø25 H7/p6')
+    Designation(nominal_mm=25.0, hole='H7', shaft='p6', inch=False, text='Ø25 H7/p6', ansi=None)
     >>> parse("1 in h6").nominal_mm
     25.4
     >>> parse("25 H7/P6")
@@ -251,6 +270,11 @@ def parse(text: str) -> Designation:
     rest = m["rest"]
     if not rest:
         raise InputError(field, text, _EXAMPLE, "no tolerance class after the nominal size")
+    if re.fullmatch(r"(?i)(RC|LC|LT|LN|FN)\s*\d{1,2}", rest):
+        cls = _a.normalise(rest)
+        if cls is None:
+            raise InputError(field, text, "an ASME B4.1 class: RC1–RC9, LC1–LC11, LT1–LT6, LN1–LN3, FN1–FN5")
+        return Designation(nominal, None, None, inch, text, cls)
     parts = [p.strip() for p in re.split(r"\s*/\s*", rest)]
     if len(parts) > 2 or any(not p for p in parts) or not all(_TOKEN_RE.match(p) for p in parts):
         hint = ""
@@ -365,6 +389,8 @@ def fit(text_or_nominal, hole: str | None = None, shaft: str | None = None, *,
     """
     if isinstance(text_or_nominal, str) and hole is None and shaft is None:
         des = parse(text_or_nominal)
+        if des.ansi:
+            return ansi_fit(des.nominal_mm, des.ansi)
         d, hole, shaft = des.nominal_mm, des.hole, des.shaft
     else:
         d = _nominal_mm(text_or_nominal)
@@ -439,3 +465,115 @@ def preferred_fits() -> list[PreferredFit]:
     """
     return [PreferredFit(r["basis"], r["fit"], r["description"], r["source"], r.get("note", ""))
             for r in read_rows("preferred_fits.csv")]
+
+
+# ------------------------------------------------------------------------------------------
+# ASME B4.1 (inch) standard fits
+UM_PER_THOU = 25.4  # 0.001 in = 25.4 µm exactly (NIST SP 811)
+
+
+def _a_size(nominal_mm: float) -> float:
+    """Nominal size in inch, rounded to 1e-9 in so "0.71 in" stays in the range "to 0.71"."""
+    return round(float(nominal_mm) / MM_PER_IN, 9)
+
+
+def _grade(sym: str) -> int:
+    m = re.search(r"(\d+)$", sym or "")
+    return int(m[1]) if m else 0
+
+
+def ansi_fit(nominal, cls: str) -> Fit:
+    """Limits of an ASME B4.1 standard fit: ``ansi_fit("1 in", "FN2")``.
+
+    Parameters
+    ----------
+    nominal : float, str or pint.Quantity
+        Nominal (basic) size: a float in mm, or ``"1 in"``, ``"25.4 mm"``, a quantity.
+    cls : str
+        Class of fit: RC1 … RC9, LC1 … LC11, LT1 … LT6, LN1 … LN3, FN1 … FN5.
+
+    Returns
+    -------
+    Fit
+        Hole and shaft zones with their limit deviations in µm (the tables' thousandths
+        of an inch × 25.4), ``system = "ASME B4.1"``, ``ansi_class`` and the ``source``
+        of the table row; ``from_memory`` is True where the row was typed from
+        recollection rather than read from a printed table.
+
+    Examples
+    --------
+    >>> f = ansi_fit("1 in", "FN2")
+    >>> f.designation, f.kind, round(f.interference_min_um, 2), round(f.interference_max_um, 2)
+    ('1 in FN2', 'interference', 15.24, 48.26)
+    >>> ansi_fit("25 in", "RC4")
+    Traceback (most recent call last):
+    ...
+    fitcheck.errors.InputError: fit: got '25 in RC4'; allowed: a nominal size over 0 to 19.69 in (ASME B4.1's ABC-agreed tables end at 19.69 in (500.126 mm))
+    """
+    name = _a.normalise(cls) if isinstance(cls, str) else None
+    if name is None:
+        raise InputError("fit", cls, "an ASME B4.1 class: RC1–RC9, LC1–LC11, LT1–LT6, LN1–LN3, FN1–FN5",
+                         did_you_mean(str(cls).upper().replace(" ", ""), _a.all_classes()))
+    d = to_core(nominal, "length", "nominal size", lo=0.0, lo_open=True)
+    size = _a_size(d)
+    hu, hl, su, sl, why = (float(v) if i < 4 else int(v)
+                           for i, v in enumerate(_a.limits_thou(size, name)))
+    if why != _a.OK:
+        allowed = (f"a nominal size over 0 to {_a.MAX_SIZE_IN} in" if why == _a.SIZE_TOO_LARGE
+                   else f"a size at which {name} is tabulated")
+        raise InputError("fit", f"{size:g} in {name}", allowed, _a.explain(why, size, name))
+    t = _a.table()[name]
+    over, upto, status, source = _a.row_info(size, name)
+    zones = []
+    for feature, sym, up, lo in (("hole", t.hole, hu, hl), ("shaft", t.shaft, su, sl)):
+        up_um, lo_um = round(up * UM_PER_THOU, 6), round(lo * UM_PER_THOU, 6)
+        label = sym or f"{name} {feature}"
+        zones.append(Zone(feature, label, re.match(r"[A-Za-z]*", sym)[0] if sym else "", _grade(sym), d,
+                          up_um, lo_um, round(d + up_um / 1000.0, 9), round(d + lo_um / 1000.0, 9),
+                          round(up_um - lo_um, 6)))
+    zh, zs = zones
+    cmax = round(zh.upper_um - zs.lower_um, 6)
+    cmin = round(zh.lower_um - zs.upper_um, 6)
+    src = f"{source}, {name}, over {over:g} to {upto:g} in"
+    if status == "memory":
+        src += " (row typed from memory: not yet checked against the printed table)"
+    return Fit(d, zh, zs, _kind(cmax, cmin), cmax, cmin, round((cmax + cmin) / 2.0, 6), round(cmax - cmin, 6),
+               "ASME B4.1", name, src, status == "memory")
+
+
+def ansi_deviations(nominal_mm, classes):
+    """Hole and shaft limits of ASME B4.1 classes for many (size, class) pairs, vectorised.
+
+    Parameters
+    ----------
+    nominal_mm : float or array_like
+        Nominal sizes [mm] (plain numbers).
+    classes : str or array_like of str
+        B4.1 class names, broadcast against ``nominal_mm``.
+
+    Returns
+    -------
+    hole_upper_um, hole_lower_um, shaft_upper_um, shaft_lower_um : ndarray
+        Limits [µm], NaN where undefined.
+    ok : ndarray of bool
+
+    Examples
+    --------
+    >>> hu, hl, su, sl, ok = ansi_deviations([25.4, 25.4], ["FN2", "RC4"])
+    >>> [round(v, 2) for v in su.tolist()], ok.tolist()
+    ([48.26, -20.32], [True, True])
+    """
+    size = np.round(np.asarray(nominal_mm, dtype=float) / MM_PER_IN, 9)
+    hu, hl, su, sl, why = _a.limits_thou(size, classes)
+    return hu * UM_PER_THOU, hl * UM_PER_THOU, su * UM_PER_THOU, sl * UM_PER_THOU, why == _a.OK
+
+
+def ansi_classes(nominal_mm=None) -> list[str]:
+    """The ASME B4.1 classes of fit (all, or those tabulated at a nominal size in mm).
+
+    >>> ansi_classes()[-1], "FN3" in ansi_classes(12.7)
+    ('FN5', False)
+    """
+    if nominal_mm is None:
+        return _a.all_classes()
+    return _a.valid_classes(_a_size(_nominal_mm(nominal_mm)))

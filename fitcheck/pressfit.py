@@ -49,8 +49,8 @@ RPM = 2.0 * math.pi / 60.0  # rad/s per rpm
 #: Keys of a ``[[pressfit]]`` table: key → meaning with unit and default.
 KEYS: dict[str, str] = {
     "name": "name of the joint (text)",
-    "fit": "ISO 286 fit, e.g. '20 H7/s6'; gives diameter and interference limits "
-           "(or give interference_min/interference_max)",
+    "fit": "ISO 286 fit, e.g. '20 H7/s6', or ASME B4.1 class, e.g. '1 in FN2'; gives diameter and "
+           "interference limits (or give interference_min/interference_max)",
     "interference_min": "smallest diametral interference, e.g. '18 um' (with diameter; negative = clearance)",
     "interference_max": "largest diametral interference, e.g. '48 um'",
     "diameter": "joint diameter, e.g. '20 mm' (needed with explicit interference; else from the fit)",
@@ -497,7 +497,7 @@ class PressFitInput:
 
 def _parse_fit(text, key):
     if not isinstance(text, str):
-        raise InputError(key, text, "an ISO 286 fit such as '20 H7/s6'")
+        raise InputError(key, text, "an ISO 286 fit such as '20 H7/s6' or an ASME B4.1 class such as '1 in FN2'")
     try:
         return _fit_limits(text.strip())
     except InputError as e:

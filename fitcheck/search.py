@@ -28,8 +28,10 @@ the checks they fail.
 
 from __future__ import annotations
 
+import itertools
 import math
 import re
+from collections.abc import Iterable, Mapping
 from dataclasses import dataclass, field, fields
 
 import numpy as np
@@ -58,6 +60,40 @@ CHECK_NAMES = ("slip at loosest fit", "hub yield at tightest fit", "shaft yield 
 def _grade(cls: str) -> int:
     m = _CLASS_RE.match(cls)
     return int(m.group(2)) if m else -99
+
+
+#: Most items of one admitted list (letters, classes or grades) of a search.
+MAX_ADMITTED = 100
+_ADMITTED = {
+    "class": ("tolerance classes such as ('H7', 'H8') or ('h6',)", r"^\s*[A-Za-z]{1,2}\d{1,2}\s*$"),
+    "letter": ("deviation letters such as ('k', 'm', 'js')", r"^\s*[A-Za-z]{1,2}\s*$"),
+    "grade": ("tolerance grades, whole numbers from 1 to 18, such as (5, 6)", None),
+}
+
+
+def _admitted(name: str, seq, kind: str) -> tuple:
+    """An admitted list of a search as a tuple without repeats; :class:`InputError` for anything else.
+
+    A text, a number or ``None`` is not a list (a text would be read letter by letter), and a
+    list of more than :data:`MAX_ADMITTED` items is refused before any is evaluated.
+
+    >>> _admitted("shaft_grades", [6, 5, 6], "grade")
+    (6, 5)
+    """
+    what, pattern = _ADMITTED[kind]
+    if isinstance(seq, str | bytes | Mapping) or not isinstance(seq, Iterable):
+        raise InputError(name, seq, f"a list of {what}")
+    items = list(itertools.islice(iter(seq), MAX_ADMITTED + 1))
+    if len(items) > MAX_ADMITTED:
+        raise InputError(name, f"more than {MAX_ADMITTED} items", f"at most {MAX_ADMITTED} {what}")
+    for x in items:
+        if kind == "grade":
+            ok = isinstance(x, int | np.integer) and not isinstance(x, bool) and 1 <= x <= 18
+        else:
+            ok = isinstance(x, str) and re.match(pattern, x) is not None
+        if not ok:
+            raise InputError(name, x, what)
+    return tuple(dict.fromkeys(int(x) if kind == "grade" else x for x in items))
 
 
 def candidates(nominal_mm: float, holes=DEFAULT_HOLES, shaft_grades=DEFAULT_SHAFT_GRADES,
@@ -221,7 +257,8 @@ def _checks_for(i: int, r: dict, a: dict, shrink: bool, press_limit_given: bool)
 
 
 def search_fits(joint, *, holes=DEFAULT_HOLES, shaft_grades=DEFAULT_SHAFT_GRADES,
-                shafts=DEFAULT_SHAFTS, hole_grades=DEFAULT_HOLE_GRADES) -> SearchResult:
+                shafts=DEFAULT_SHAFTS, hole_grades=DEFAULT_HOLE_GRADES,
+                systems=("iso",)) -> SearchResult:
     """Evaluate every admitted fit for a press-fit joint and rank those that pass.
 
     Parameters
@@ -231,6 +268,9 @@ def search_fits(joint, *, holes=DEFAULT_HOLES, shaft_grades=DEFAULT_SHAFT_GRADES
         the nominal size.
     holes, shaft_grades, shafts, hole_grades
         The admitted set (see :func:`candidates`).
+    systems : tuple of {"iso", "ansi"}
+        Search the ISO 286 fits of the admitted set, the ASME B4.1 classes of fit tabulated at
+        the size (RC, LC, LT, LN, FN; basis ``"ANSI B4.1"``, fit written ``"1 in FN2"``), or both.
 
     Returns
     -------
@@ -259,6 +299,9 @@ def search_fits(joint, *, holes=DEFAULT_HOLES, shaft_grades=DEFAULT_SHAFT_GRADES
     a.pop("_fit")
     a.pop("interference_min")
     a.pop("interference_max")
+    holes, shafts = _admitted("holes", holes, "class"), _admitted("shafts", shafts, "class")
+    shaft_grades = _admitted("shaft_grades", shaft_grades, "grade")
+    hole_grades = _admitted("hole_grades", hole_grades, "grade")
     for name, seq in (("holes", holes), ("shafts", shafts)):
         for c in seq:
             if not isinstance(c, str) or not _CLASS_RE.match(c.strip()):
@@ -267,14 +310,26 @@ def search_fits(joint, *, holes=DEFAULT_HOLES, shaft_grades=DEFAULT_SHAFT_GRADES
         for g in seq:
             if isinstance(g, bool) or not isinstance(g, int) or not 1 <= g <= 18:
                 raise InputError(name, g, "tolerance grades, whole numbers from 1 to 18")
-    cands = candidates(d, holes, shaft_grades, shafts, hole_grades)
-    if not cands:
+    systems = (systems,) if isinstance(systems, str) else tuple(systems)
+    if not systems or any(x not in ("iso", "ansi") for x in systems):
+        raise InputError("systems", list(systems), "'iso', 'ansi' or both")
+    cands = candidates(d, holes, shaft_grades, shafts, hole_grades) if "iso" in systems else []
+    ansi = fits.ansi_classes(d) if "ansi" in systems and d / 25.4 <= 19.69 else []
+    if not cands and not ansi:
         raise InputError("admitted set", f"{list(holes)} / {list(shafts)}",
-                         f"at least one hole/shaft combination ISO 286 defines at {d:g} mm")
-    hs = np.array([c[0] for c in cands])
-    ss = np.array([c[1] for c in cands])
-    h_up, h_lo, h_ok = fits.deviations(np.full(hs.shape, d), hs, "hole")
-    s_up, s_lo, s_ok = fits.deviations(np.full(ss.shape, d), ss, "shaft")
+                         f"at least one hole/shaft combination ISO 286 defines at {d:g} mm"
+                         + (" or an ASME B4.1 class tabulated there" if "ansi" in systems else ""))
+    hs = np.array([c[0] for c in cands], dtype=object)
+    ss = np.array([c[1] for c in cands], dtype=object)
+    h_up, h_lo, h_ok = fits.deviations(np.full(hs.shape, d), hs.astype(str), "hole")
+    s_up, s_lo, s_ok = fits.deviations(np.full(ss.shape, d), ss.astype(str), "shaft")
+    if ansi:  # ASME B4.1 classes: tabulated hole and shaft limits of the class at the size
+        from .core import ansi_b41
+        a_hu, a_hl, a_su, a_sl, a_ok = fits.ansi_deviations(np.full(len(ansi), d), np.array(ansi, dtype=object))
+        tab = ansi_b41.table()
+        cands = cands + [(tab[n].hole, tab[n].shaft or f"{n} shaft", f"ANSI B4.1 {n}") for n in ansi]
+        h_up, h_lo, h_ok = (np.concatenate([x, y]) for x, y in ((h_up, a_hu), (h_lo, a_hl), (h_ok, a_ok)))
+        s_up, s_lo, s_ok = (np.concatenate([x, y]) for x, y in ((s_up, a_su), (s_lo, a_sl), (s_ok, a_ok)))
     keep = h_ok & s_ok
     r = _arrays(a, h_up[keep], h_lo[keep], s_up[keep], s_lo[keep])
     n = int(np.count_nonzero(keep))
@@ -297,10 +352,15 @@ def search_fits(joint, *, holes=DEFAULT_HOLES, shaft_grades=DEFAULT_SHAFT_GRADES
     if press_given and not shrink:
         ok &= r["press_force_max"] <= a["press_force_limit"]
 
+    def label(c) -> str:  # "H7/s6", or the B4.1 class "FN2"
+        return c[2][len("ANSI B4.1 "):] if c[2].startswith("ANSI B4.1 ") else f"{c[0]}/{c[1]}"
+
     def make(i: int) -> Candidate:
         h, s, b = cands[i]
+        name = label(cands[i])
+        fit = f"{round(d / 25.4, 9):g} in {name}" if b.startswith("ANSI") else f"{d:g} {h}/{s}"
         return Candidate(
-            fit=f"{d:g} {h}/{s}", hole=h, shaft=s, basis=b, preferred=f"{h}/{s}" in preferred,
+            fit=fit, hole=h, shaft=s, basis=b, preferred=name in preferred,
             hole_upper_um=float(h_up[i]), hole_lower_um=float(h_lo[i]),
             shaft_upper_um=float(s_up[i]), shaft_lower_um=float(s_lo[i]),
             interference_min_um=float(s_lo[i] - h_up[i]), interference_max_um=float(s_up[i] - h_lo[i]),
@@ -315,7 +375,7 @@ def search_fits(joint, *, holes=DEFAULT_HOLES, shaft_grades=DEFAULT_SHAFT_GRADES
     pas = np.flatnonzero(ok)
     rej = np.flatnonzero(~ok)
     yield_min = np.minimum(r["hub_yield_safety"] / hub_req, r["shaft_yield_safety"] / shaft_req)
-    names = [f"{h}/{s}" for h, s, _ in cands]
+    names = [label(c) for c in cands]
     order = sorted(pas, key=lambda i: (-slip_v[i], names[i] not in preferred, -yield_min[i], names[i]))
     passing = tuple(_ranked(make(i), k + 1) for k, i in enumerate(order))
     rejected_all = [make(i) for i in rej]
@@ -329,7 +389,8 @@ def search_fits(joint, *, holes=DEFAULT_HOLES, shaft_grades=DEFAULT_SHAFT_GRADES
     return SearchResult(joint=joint.name, nominal_mm=d, evaluated=n, passing=passing,
                         rejected=tuple(rejected_all),
                         admitted={"holes": tuple(holes), "shaft_grades": tuple(shaft_grades),
-                                  "shafts": tuple(shafts), "hole_grades": tuple(hole_grades)},
+                                  "shafts": tuple(shafts), "hole_grades": tuple(hole_grades),
+                                  "systems": systems},
                         notes=tuple(notes))
 
 
@@ -471,6 +532,10 @@ def search_bearing_seat(joint, *, shaft_letters=BEARING_SHAFT_LETTERS,
 
     if not isinstance(joint, bearings.BearingSeatInput):
         raise InputError("joint", type(joint).__name__, "a BearingSeatInput (fitcheck.bearings)")
+    shaft_letters = _admitted("shaft_letters", shaft_letters, "letter")
+    housing_letters = _admitted("housing_letters", housing_letters, "letter")
+    shaft_grades = _admitted("shaft_grades", shaft_grades, "grade")
+    housing_grades = _admitted("housing_grades", housing_grades, "grade")
     b = bearings.bearing(joint.designation)
     with warnings.catch_warnings():
         warnings.simplefilter("ignore")

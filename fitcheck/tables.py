@@ -38,17 +38,29 @@ def data_dir() -> Path:
     raise TableError("the data tables were not found (neither fitcheck/data nor ./data)")
 
 
+def is_comment(line: str) -> bool:
+    """True for a comment line of a data table: ``#`` then a blank or the end of the line.
+
+    >>> is_comment("# Clearance holes [mm]"), is_comment("#"), is_comment("#10,ASME B18.2.8,5.105")
+    (True, True, False)
+    """
+    s = line.strip()
+    return s.startswith("#") and (len(s) == 1 or s[1].isspace())
+
+
 @functools.cache
 def read_rows(name: str) -> tuple[dict[str, str], ...]:
     """All rows of ``data/<name>`` as dictionaries of strings (cached).
 
-    Blank lines and lines starting with ``#`` are skipped.
+    Blank lines and comment lines are skipped. A comment line starts with ``#`` followed by a
+    blank (or nothing): ``# source ...``. A data row may begin with ``#`` followed by anything else,
+    so the numbered inch sizes (``#0,ASME B18.2.8,...``, ``#10-24 UNC``) are data, never comments.
     """
     path = data_dir() / name
     if not path.is_file():
         raise TableError(f"table {name!r} not found in {path.parent}")
     with path.open(newline="", encoding="utf-8") as f:
-        lines = [ln for ln in f if ln.strip() and not ln.lstrip().startswith("#")]
+        lines = [ln for ln in f if ln.strip() and not is_comment(ln)]
     reader = csv.DictReader(lines)
     rows = tuple(dict(r) for r in reader)
     if not rows:

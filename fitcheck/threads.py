@@ -29,6 +29,8 @@ __all__ = [
 
 HEAD_TYPES = ("hex", "socket", "pan", "button", "countersunk")
 HOLE_SERIES = ("fine", "medium", "coarse")
+#: ASME B18.2.8 names of the inch clearance-hole series, read as the ISO 273 series in the same column.
+HOLE_ALIASES = {"close": "fine", "normal": "medium", "loose": "coarse"}
 
 
 @dataclass(frozen=True)
@@ -155,6 +157,7 @@ class PropertyClass:
     E : float — Young's modulus [MPa]
     alpha : float — expansion coefficient [1/K]
     material : str
+    tauB_ratio : float — shear over tensile strength τB/Rm of the screw (VDI 2230-1:2015, Table 7) [-]
     """
 
     name: str
@@ -165,6 +168,7 @@ class PropertyClass:
     E: float
     alpha: float
     material: str
+    tauB_ratio: float = 0.6
 
     @property
     def stainless(self) -> bool:
@@ -174,6 +178,7 @@ class PropertyClass:
 def _class_key(s: str) -> str:
     k = _norm(s)
     k = re.sub(r"^(SAEJ429|SAE|GRADE|GR)\.?(\d)$", r"SAE\2", k)
+    k = re.sub(r"^(ASTM)?A574$", "ASTMA574", k)
     return k
 
 
@@ -183,7 +188,7 @@ def _classes() -> dict[str, list[tuple[float, float, PropertyClass]]]:
     for r in tables.read_rows("property_classes.csv"):
         pc = PropertyClass(r["class"], r["standard"], float(r["Rp02_MPa"]), float(r["Rm_MPa"]),
                            float(r["Sp_MPa"]), float(r["E_MPa"]), float(r["alpha_1e-6_per_K"]) * 1e-6,
-                           r["material"])
+                           r["material"], float(r["tauB_per_Rm"]))
         if not 0 < pc.Sp <= pc.Rp02 < pc.Rm:
             raise TableError(f"property_classes.csv, {pc.name}: expected 0 < Sp <= Rp0.2 < Rm")
         out.setdefault(_class_key(pc.name), []).append((float(r["d_over_mm"]), float(r["d_upto_mm"]), pc))
@@ -202,14 +207,16 @@ def property_class_names() -> list[str]:
 def property_class(name: str, d: float, field: str = "property_class") -> PropertyClass:
     """The property class ``name`` for a screw of nominal diameter ``d`` [mm].
 
-    Sizes beyond a class's range are refused; below the range of an inch grade (SAE J429
-    starts at 1/4 in) a :class:`~fitcheck.errors.MethodRangeWarning` is given and the smallest
-    range's values are used.
+    Sizes beyond a class's range are refused. SAE J429 grades start at 1/4 in: a smaller inch
+    screw (#0 … #12) with an SAE grade is refused with the choices that do apply — ASTM A574 for
+    socket head cap screws, or an ISO 898-1 class chosen knowingly for the material specified.
 
     >>> property_class("8.8", 20.0).Rp02
     660.0
     >>> property_class("sae 5", 12.7).Sp
     586.1
+    >>> property_class("A574", 4.83).Rm
+    1241.1
     """
     if not isinstance(name, str):
         name = str(name)
@@ -221,6 +228,11 @@ def property_class(name: str, d: float, field: str = "property_class") -> Proper
         if lo < d <= up or (i == 0 and lo - 1e-9 <= d <= up):  # the first range includes its lower end
             return pc
     lo0, up_last = ranges[0][0], ranges[-1][1]
+    if d <= lo0 and ranges[0][2].standard.startswith("SAE J429"):
+        raise InputError(field, name, f"a grade that covers a {d:g} mm screw: {ranges[0][2].standard} "
+                         f"grades start at 1/4 in ({lo0:g} mm); for #0 … #12 socket head cap screws use "
+                         "'ASTM A574', otherwise an ISO 898-1 class such as '8.8' for the material "
+                         "the drawing specifies")
     if d <= lo0:
         warnings.warn(f"{field}: {ranges[0][2].standard} covers {ranges[0][2].name} from "
                       f"{lo0:g} mm; the values of its smallest size range are used for {d:g} mm",
@@ -282,13 +294,19 @@ def _holes() -> dict[str, tuple[str, float, float, float]]:
 def clearance_hole(size: str, series: str = "medium", field: str = "hole") -> float:
     """Clearance-hole diameter [mm] of ISO 273 (metric) or ASME B18.2.8 (inch) for a size and series.
 
+    The inch series close / normal / loose of ASME B18.2.8 are the columns fine / medium / coarse;
+    either name is accepted.
+
     >>> clearance_hole("M8", "medium")
     9.0
+    >>> round(clearance_hole("#8", "normal") / 25.4, 3)
+    0.177
     """
     s = str(series).strip().lower()
+    s = HOLE_ALIASES.get(s, s)
     if s not in HOLE_SERIES:
-        raise InputError(field, series, "fine, medium, coarse or a diameter such as '9 mm'",
-                         did_you_mean(series, HOLE_SERIES))
+        raise InputError(field, series, "fine, medium, coarse (inch: close, normal, loose) or a diameter "
+                         "such as '9 mm'", did_you_mean(series, HOLE_SERIES + tuple(HOLE_ALIASES)))
     row = _holes().get(size)
     if row is None:
         raise InputError(field, series, f"an explicit hole diameter (no clearance-hole table for {size})")
@@ -317,12 +335,19 @@ def _washers() -> dict[tuple[str, str], Washer]:
 
 
 def washer(size: str, head_type: str, field: str = "washer") -> Washer:
-    """The plain washer for a size: ISO 7089 (normal) under hex heads, ISO 7092 (small) otherwise.
+    """The plain washer for a size: ISO 7089 (normal) under hex heads, ISO 7092 (small) otherwise;
+    inch sizes ASME B18.22.1 Type B, regular series under hex heads, narrow series otherwise.
 
     >>> washer("M6", "hex").d2
     12.0
+    >>> round(washer("#8", "socket").d2 / 25.4, 3)
+    0.375
     """
-    std = "ISO 7089" if head_type == "hex" else "ISO 7092"
+    metric = size.startswith("M")
+    if metric:
+        std = "ISO 7089" if head_type == "hex" else "ISO 7092"
+    else:
+        std = "ASME B18.22.1 R" if head_type == "hex" else "ASME B18.22.1 N"
     w = _washers().get((std, size))
     if w is None:
         raise InputError(field, True, f"washer = false (no {std} washer is tabulated for {size}); "

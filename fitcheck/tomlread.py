@@ -1,16 +1,19 @@
 """Safe reading of TOML files (case files): size cap, no code execution, clear errors.
 
 TOML is parsed with the standard library's :mod:`tomllib`, which only builds
-data; nothing in a file is ever executed.
+data; nothing in a file is ever executed. Before parsing, the text is scanned for
+nesting, value counts and text lengths beyond what a case file holds
+(:mod:`fitcheck.inputlimits`), so a hostile file is refused in time linear in its size.
+A UTF-8 byte-order mark at the start is read past.
 """
 
 from __future__ import annotations
 
-import math
 import tomllib
 from pathlib import Path
 
 from .errors import InputError
+from .inputlimits import check_tree, scan_text
 
 MAX_BYTES = 1 << 20  # 1 MiB
 
@@ -28,11 +31,16 @@ def read_toml_bytes(raw: bytes, source: str = "case file") -> dict:
                          "a UTF-8 TOML text file") from None
     if "\x00" in text:
         raise InputError(source, "binary data (NUL bytes)", "a UTF-8 TOML text file")
+    text = text.removeprefix("\ufeff")  # a UTF-8 byte-order mark, as some editors write: read past it
+    scan_text(text, source)  # nesting, count and length limits, before tomllib recurses or loops
     try:
         data = tomllib.loads(text)
     except tomllib.TOMLDecodeError as exc:
         raise InputError(source, "invalid TOML", "TOML syntax (https://toml.io)", str(exc)) from None
-    _reject_nonfinite(data, source)
+    except (RecursionError, ValueError) as exc:  # pragma: no cover - scan_text refuses these first
+        raise InputError(source, "TOML that cannot be read", "a case file as fitcheck writes it",
+                         type(exc).__name__) from None
+    check_tree(data, source)
     return data
 
 
@@ -45,14 +53,3 @@ def read_toml(path: str | Path) -> dict:
     if size > MAX_BYTES:
         raise InputError(str(path), f"{size} bytes", f"a file of at most {MAX_BYTES} bytes (1 MiB)")
     return read_toml_bytes(p.read_bytes(), str(path))
-
-
-def _reject_nonfinite(obj, where: str) -> None:
-    if isinstance(obj, float) and not math.isfinite(obj):
-        raise InputError(where, obj, "a finite number (nan and inf are not accepted)")
-    if isinstance(obj, dict):
-        for k, v in obj.items():
-            _reject_nonfinite(v, f"{where}.{k}" if where else k)
-    elif isinstance(obj, list):
-        for i, v in enumerate(obj):
-            _reject_nonfinite(v, f"{where}[{i}]")

@@ -111,14 +111,9 @@ def _parse(value, field: str):
             value = Q_(value.magnitude, str(value.units))
         return value
     if isinstance(value, str):
-        text = value.strip().replace("·", "*").replace("×", "*").replace("Ø", "")
-        if not text:
-            raise InputError(field, value, "a number with a unit, e.g. '25 mm'")
-        try:
-            return ureg.Quantity(text)
-        except Exception as exc:  # pint raises several unrelated types here
-            raise InputError(field, value, "a number with a known unit, e.g. '25 mm'",
-                             f"could not read it: {type(exc).__name__}") from None
+        from .qparse import parse  # the restricted grammar: pint never evaluates an expression
+
+        return parse(value, field)
     if isinstance(value, bool):
         raise InputError(field, value, "a number with a unit, not true/false")
     if isinstance(value, Real | np.floating | np.integer):
@@ -183,9 +178,19 @@ def _article(kind: str) -> str:
     return ("an " if name[0] in "aeiou" else "a ") + name
 
 
+#: Largest magnitude of a load any joint of a compact drive can see, in core units: a larger
+#: value is a slip of the unit or the exponent (common practice: the same bounds as the case
+#: loader's plausibility limits, ``fitcheck.case.SCOPE_LIMITS``).
+MAGNITUDE_LIMITS: dict[str, float] = {"force": 1e8, "torque": 1e10, "moment": 1e10}
+
+
 def _check_range(out, value, kind, field, lo, hi, lo_open, hi_open):
     if not math.isfinite(out):
         raise InputError(field, value, "a finite number")
+    most = MAGNITUDE_LIMITS.get(kind)
+    if most is not None and abs(out) > most and (hi is None or hi > most or lo is None or lo < -most):
+        raise InputError(field, value, f"{_article(kind)} of magnitude ≤ {most:g} {CORE[kind]}",
+                         "absurd for a compact drive: unit or exponent mixed up?")
     unit = CORE[kind]
     bad_lo = lo is not None and (out <= lo if lo_open else out < lo)
     bad_hi = hi is not None and (out >= hi if hi_open else out > hi)

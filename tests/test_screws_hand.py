@@ -55,7 +55,14 @@ def _hand():
     FMzul = As * 0.9 * Rp02 / math.sqrt(1 + 3 * k * k)
     MA = FMzul * (0.16 * P + 0.58 * d2 * mu + mu * (dw + dh) / 4)
     alphaA = 2.0              # VDI 2230-1:2015 Table A8, torque wrench, friction class B  # from memory
-    FKR = FMzul / alphaA - (1 - phi) * FA - FZ - loss
+    # VDI 2230-1:2015, 5.4.3: αA = FM,max/FM,min; the friction range alone (μ 0.10 … 0.14) spreads the
+    # preload of one torque by the ratio of the torque coefficients, which must not exceed αA here
+    k_lo = 0.16 * P + 0.58 * d2 * 0.10 + 0.10 * (dw + dh) / 4
+    k_hi = 0.16 * P + 0.58 * d2 * 0.14 + 0.14 * (dw + dh) / 4
+    assert k_hi / k_lo < alphaA
+    # wrench setting: MA rounded down to 0.1 N·m (5 … 20 N·m)  # common practice
+    Mset = math.floor(MA / 100) * 100
+    FKR = FMzul * Mset / MA / alphaA - (1 - phi) * FA - FZ - loss
     FSmax = FMzul + phi * FA + gain
     tau = FMzul * d2 / 2 * (P / (math.pi * d2) + 1.155 * mu) / (math.pi * ds ** 3 / 16)
     sred = math.sqrt((FSmax / As) ** 2 + 3 * (0.5 * tau) ** 2)
@@ -64,6 +71,7 @@ def _hand():
     return dict(As=As, delta_S=dS, delta_P=dP, tan_phi=tphi, load_factor=phi, F_A=FA, F_Z=FZ,
                 dF_th_cold=-loss, dF_th_warm=gain, F_M_zul=FMzul, tightening_torque=MA, F_KR_min=FKR,
                 F_S_max=FSmax, sigma_red_B=sred, surface_pressure=p, sigma_a=sa,
+                tightening_torque_set=Mset, alpha_A_friction=k_hi / k_lo,
                 sigma_AS=0.85 * (150 / d + 45))
 
 

@@ -3,7 +3,7 @@
 import pytest
 
 from fitcheck import threads
-from fitcheck.errors import InputError, MethodRangeWarning
+from fitcheck.errors import InputError
 
 # ISO 724:1993, basic dimensions: d2 (pitch) and D1 (minor, internal) [mm]  # from memory
 ISO724 = {
@@ -60,8 +60,9 @@ def test_property_class_names_and_inch_grades():
     assert (g5.Sp, g5.Rp02, g5.Rm) == pytest.approx((85 * 6.894757, 92 * 6.894757, 120 * 6.894757), abs=0.06)
     # SAE J429 grade 8: proof 120 ksi, tensile 150 ksi  # from memory
     assert threads.property_class("SAE8", 20.0).Sp == pytest.approx(120 * 6.894757, abs=0.06)
-    with pytest.warns(MethodRangeWarning):
-        threads.property_class("SAE 5", 4.83)   # #10 is below the J429 range
+    # #10 is below the J429 range (1/4 in and up): refused, naming the grade that applies
+    with pytest.raises(InputError, match="ASTM A574"):
+        threads.property_class("SAE 5", 4.83)
     with pytest.raises(InputError, match="did you mean"):
         threads.property_class("8.9", 10.0)
 

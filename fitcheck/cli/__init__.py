@@ -22,6 +22,7 @@ import pkgutil
 import sys
 
 from ..errors import FitcheckError, InputErrors
+from . import _units
 
 EXIT_OK, EXIT_FAILED_CHECK, EXIT_BAD_INPUT = 0, 1, 2
 
@@ -57,6 +58,7 @@ def build_parser() -> argparse.ArgumentParser:
         p = sub.add_parser(mod.COMMAND, help=mod.HELP, description=mod.HELP)
         p._cmd = mod.COMMAND
         mod.add_arguments(p)
+        _units.add(p)
         p.set_defaults(_run=mod.run)
     return parser
 
@@ -68,17 +70,32 @@ def main(argv: list[str] | None = None) -> int:
         parser.print_help()
         return EXIT_BAD_INPUT
     try:
+        sysname = _units.system(args) if getattr(args, "units", None) else _units.case_system(args)
+        if sysname == "inch" and not getattr(args, "json", False):
+            with _units.redirect(sysname):
+                return int(args._run(args))
         return int(args._run(args))
-    except InputErrors as exc:
-        sys.stderr.write(f"fitcheck: {exc.message}\n")
+    except InputErrors as exc:  # one problem on one line; several as a list
+        msg = exc.errors[0].message if len(exc.errors) == 1 else exc.message
+        sys.stderr.write(f"fitcheck: {msg}\n")
         return EXIT_BAD_INPUT
     except FitcheckError as exc:
-        sys.stderr.write(f"fitcheck: {exc}\n")
+        sys.stderr.write(f"fitcheck: {_one_line(str(exc))}\n")
+        return EXIT_BAD_INPUT
+    except BrokenPipeError:
+        return EXIT_OK
+    except OSError as exc:  # a file that cannot be read or written: a folder, /proc, no permission
+        where = f"{exc.filename}: " if getattr(exc, "filename", None) else ""
+        sys.stderr.write(f"fitcheck: {where}{exc.strerror or type(exc).__name__} "
+                         "(a readable input file and a writable output path are needed)\n")
         return EXIT_BAD_INPUT
     except KeyboardInterrupt:
         return 130
-    except BrokenPipeError:
-        return EXIT_OK
+
+
+def _one_line(text: str) -> str:
+    """An error message on one line (an engine's message may hold a newline)."""
+    return " ".join(text.split("\n"))
 
 
 def clean_json(obj):
@@ -102,6 +119,11 @@ def print_json(obj) -> None:
 def print_table(headers: list[str], rows: list[list], out=None) -> None:
     """Print a plain text table with aligned columns."""
     out = out or sys.stdout
+    system = getattr(out, "system", None) or getattr(sys.stdout, "system", None)
+    if system == "inch":
+        from ..display import table_in_system, text_in_system
+        headers, rows = table_in_system(headers, rows, system)
+        rows = [[text_in_system(str(c), system) for c in r] for r in rows]
     cells = [[str(h) for h in headers]] + [[str(c) for c in r] for r in rows]
     widths = [max(len(r[i]) for r in cells) for i in range(len(headers))]
     for j, r in enumerate(cells):

@@ -50,7 +50,11 @@ def load_all(paths: list[Path]):
     results = []
     for p in paths:
         try:
-            results.append((p, case_mod.evaluate(case_mod.load(p))))
+            dc = case_mod.load(p)
+            if not len(dc):
+                raise InputError(str(p), "a case with no joints", "at least one joint table: "
+                                 + ", ".join(f"[[{t}]]" for t in case_mod.ENGINES))
+            results.append((p, case_mod.evaluate(dc)))
         except (InputError, InputErrors) as exc:
             items = exc.errors if isinstance(exc, InputErrors) else [exc]
             prefix = str(p) if len(paths) > 1 else ""

@@ -30,7 +30,10 @@ def run(args) -> int:
     out = Path(args.output)
     if out.suffix.lower() not in report.FORMATS:
         raise InputError("-o/--output", args.output, "a file name ending in .html, .htm or .pdf")
-    result = case_mod.evaluate(case_mod.load(args.case))
+    case = case_mod.load(args.case)
+    if getattr(args, "units", None):  # --units overrides the file's unit_system for the report
+        case = case_mod.replace(case, unit_system="inch" if args.units == "inch" else "SI")
+    result = case_mod.evaluate(case)
     path = report.write(result, out)
     verdict = "every check passes" if result.ok else "at least one check FAILS"
     sys.stdout.write(f"wrote {path} ({len(result.checks)} checks: {verdict})\n\n"

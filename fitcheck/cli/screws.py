@@ -19,7 +19,41 @@ HELP = "check the [[screws]] joints of a case file (preload, torque, clamp load,
 _CONDITION_KEYS = ("temperature_min", "temperature_max", "temperature_assembly")
 
 
+#: JSON keys of each joint added after version 1 (the older keys keep their names and meaning).
+NEW_JSON_KEYS = {
+    "tightening_instruction": "one line for the drawing: wrench setting in N·m and lbf·in, method, preload range",
+    "tightening_torque_set_Nm": "wrench setting: MA rounded down to a settable step [N·m]",
+    "tightening_torque_set_lbf_in": "the same setting in lbf·in, rounded down",
+    "preload_set_max_N / preload_set_min_N": "preload of the setting at the lowest friction / divided by αA [N]",
+    "tightening_factor_method / tightening_factor_friction": "αA of Table A8 / scatter of the friction range",
+    "preload_scatter_governs": "'tightening method' or 'friction range' (tightening_factor is the larger)",
+    "slip_safety / slip_safety_required": "S_G = FKR,min·qF·μT/FQ and its limit (R12)",
+    "screw_shear_stress_MPa / screw_shear_strength_MPa / screw_shear_safety": "the screw in shear if the joint slips",
+    "engagement_effective_min_mm / engagement_allowance_mm": "m_eff of R11 and the countersink/runout allowance",
+    "engagement_strength_ratio, engagement_C1/C2/C3, engagement_strips_first": "R11 factors",
+    "bearing_diameter_effective_mm": "diameter of the pressure area on the part (under a washer: load spread)",
+    "shigley_effective_grip_mm": "Shigley's grip l' = h + d/2 of a tapped joint (comparison only)",
+}
+
+
+def _epilog() -> str:
+    import textwrap
+
+    lines = ["keys of a [[screws]] table:"]
+    for k, v in KEYS.items():
+        lines += textwrap.wrap(v, 100, initial_indent=f"  {k:28s} ", subsequent_indent=" " * 31)
+    lines.append("")
+    lines.append("JSON keys per joint added to the documented ones (README):")
+    for k, v in NEW_JSON_KEYS.items():
+        lines += textwrap.wrap(v, 100, initial_indent=f"  {k}: ", subsequent_indent="      ")
+    return "\n".join(lines)
+
+
 def add_arguments(p) -> None:
+    import argparse
+
+    p.formatter_class = argparse.RawDescriptionHelpFormatter
+    p.epilog = _epilog()
     p.add_argument("case", help="TOML case file with one or more [[screws]] tables")
     p.add_argument("--json", action="store_true", help="print one JSON object")
 
@@ -83,15 +117,20 @@ def run(args) -> int:
         service = (f"service {inp.temperature_min:g}…{inp.temperature_max:g} °C"
                    if inp.temperature_min != inp.temperature_max else "no temperature change")
         out.write(f"  μG {muG[0]:g}…{muG[1]:g}, μK {muK[0]:g}…{muK[1]:g}; assembled at "
-                  f"{inp.temperature_assembly:g} °C, {service}\n\n")
+                  f"{inp.temperature_assembly:g} °C, {service}\n")
+        out.write(f"  {r.tightening_instruction}\n\n")
         print_table(["quantity", "value", "unit"], [
-            ["tightening torque MA (set point)", _f(r.tightening_torque / 1000, 3), "N·m"],
+            ["tightening torque MA (set point)",
+             f"{r.tightening_torque_set / 1000:g} ({r.tightening_torque_set_lbf_in:g} lbf·in)", "N·m"],
+            ["  MA for FM,zul at μ min (before rounding down)", _f(r.tightening_torque / 1000, 4), "N·m"],
             ["  gives FM,zul at μ min / preload at μ max (friction only)", f"{_f(r.F_M_zul)} / {_f(r.preload_at_mu_max)}", "N"],
-            [f"  tightening factor αA ({method})", f"{r.alpha_A:g}", ""],
-            ["  smallest assembly preload FM,zul/αA", _f(r.F_M_zul / r.alpha_A), "N"],
+            [f"  tightening factor αA ({method})", f"{r.alpha_A:.3g}", ""],
+            [f"    Table A8 / friction range: {r.scatter_governs} governs",
+             f"{r.alpha_A_method:g} / {r.alpha_A_friction:.3g}", ""],
+            ["  smallest assembly preload FM,set/αA", _f(r.preload_set_min), "N"],
             [f"FM,zul (ν = {inp.utilisation:g}, μG = {muG[0]:g})", _f(r.F_M_zul), "N"],
             ["FM,min needed / αA·FM,min needed", f"{_f(r.F_M_min)} / {_f(r.F_M_max)}", "N"],
-            ["Shigley T = 0.2·F·d (cross-check only)", _f(r.torque_shigley / 1000, 3), "N·m"],
+            ["Shigley T = K·F·d, K = 0.2 (rough cross-check, not a setting)", _f(r.torque_shigley / 1000, 3), "N·m"],
             ["stress area As", _f(r.As), "mm²"],
             ["screw / clamp stiffness", f"{_f(r.screw_stiffness / 1000)} / {_f(r.clamp_stiffness / 1000)}", "kN/mm"],
             ["load factor Φ (load introduction n)", f"{r.load_factor:.3f} ({r.load_introduction:g})", ""],
@@ -102,7 +141,10 @@ def run(args) -> int:
             ["residual clamp load FKR,min", _f(r.F_KR_min), "N"],
             ["σred,B / yield safety", f"{_f(r.sigma_red_B)} / {r.yield_safety:.2f}", "MPa / –"],
             ["surface pressure / pG", f"{_f(r.surface_pressure)} / {_f(r.p_G)}", "MPa"],
-            ["engagement / minimum", f"{_f(r.engagement)} / {_f(r.engagement_min)}", "mm"],
+            ["engagement / minimum (m_eff + allowance, R11)",
+             f"{_f(r.engagement)} / {_f(r.engagement_min)} ({_f(r.engagement_effective_min)} + "
+             f"{_f(r.engagement_allowance, 3)})", "mm"],
+            ["slip safety S_G / required", f"{_f(r.slip_safety, 3)} / {_f(r.slip_safety_required, 3)}", ""],
             ["fatigue σa / σAS", f"{_f(r.sigma_a)} / {_f(r.sigma_AS)}", "MPa"],
         ])
         out.write("\n")

@@ -38,6 +38,9 @@ def add_arguments(p) -> None:
                    help="basis shafts of the shaft-basis set (default h5,h6,h7)")
     p.add_argument("--hole-grades", default="6,7,8", metavar="LIST",
                    help="grades of the holes mated with them (default 6,7,8)")
+    p.add_argument("--fits", type=str.lower, choices=("iso", "ansi", "both"), default="iso",
+                   help="which fits to search: the ISO 286 admitted set (default), the ASME B4.1 "
+                        "classes (RC, LC, LT, LN, FN) tabulated at the size, or both")
     p.add_argument("--plot", metavar="FILE.png", help="also save the ranking chart as an image")
     p.add_argument("--json", action="store_true", help="print the result as JSON")
 
@@ -53,7 +56,7 @@ def _grades(text: str, option: str) -> tuple[int, ...]:
         t = t.strip().upper().removeprefix("IT")
         if not t:
             continue
-        if not t.isdigit():
+        if not (t.isascii() and t.isdigit()) or len(t) > 2:
             raise InputError(option, text, "grades separated by commas, e.g. '5,6,7'")
         out.append(int(t))
     return tuple(out)
@@ -75,14 +78,19 @@ def print_search(r, k: int, current: str | None = None, out=None) -> None:
     head = f"Fit search '{r.joint}' — {r.nominal_mm:g} mm"
     out.write(f"{head}\n{'=' * len(head)}\n")
     a = r.admitted
-    out.write(f"admitted: holes {', '.join(a['holes'])} with shafts IT{'/'.join(map(str, a['shaft_grades']))}; "
-              f"shafts {', '.join(a['shafts'])} with holes IT{'/'.join(map(str, a['hole_grades']))}; "
+    systems = a.get("systems", ("iso",))
+    iso = (f"holes {', '.join(a['holes'])} with shafts IT{'/'.join(map(str, a['shaft_grades']))}; "
+           f"shafts {', '.join(a['shafts'])} with holes IT{'/'.join(map(str, a['hole_grades']))}")
+    admitted = "; ".join(([iso] if "iso" in systems else [])
+                         + (["ASME B4.1 classes RC, LC, LT, LN, FN tabulated at the size"]
+                            if "ansi" in systems else []))
+    out.write(f"admitted: {admitted}; "
               f"{r.evaluated} fits defined at this size, {len(r.passing)} pass every check\n\n")
     if r.passing:
         out.write("Ranked fits (largest minimum slip safety first; * preferred)\n")
         rows = []
         for c in r.passing[:k]:
-            rows.append([c.rank, f"{c.hole}/{c.shaft}" + ("*" if c.preferred else ""), c.basis,
+            rows.append([c.rank, _name(c) + ("*" if c.preferred else ""), c.basis,
                          f"{c.interference_min_um:+g} … {c.interference_max_um:+g}",
                          f"{c.slip_safety_min:.3g}", f"{c.hub_yield_safety:.3g}",
                          f"{c.shaft_yield_safety:.3g}", f"{c.press_force_max / 1000:.3g}",
@@ -94,7 +102,7 @@ def print_search(r, k: int, current: str | None = None, out=None) -> None:
         rows = []
         for c in r.rejected[:k]:
             why = "; ".join(f"{n} {m * 100:+.1f} %" for n, m in c.failing)
-            rows.append([f"{c.hole}/{c.shaft}" + ("*" if c.preferred else ""),
+            rows.append([_name(c) + ("*" if c.preferred else ""),
                          f"{c.interference_min_um:+g} … {c.interference_max_um:+g}", why])
         print_table(["fit", "interference [um]", "fails"], rows, out)
     if current:
@@ -122,7 +130,9 @@ def run(args) -> int:
     r = search_fits(inp, holes=_classes(args.holes, "--holes"),
                     shaft_grades=_grades(args.shaft_grades, "--shaft-grades"),
                     shafts=_classes(args.shafts, "--shafts"),
-                    hole_grades=_grades(args.hole_grades, "--hole-grades"))
+                    hole_grades=_grades(args.hole_grades, "--hole-grades"),
+                    systems={"iso": ("iso",), "ansi": ("ansi",), "both": ("iso", "ansi")}[
+                        getattr(args, "fits", "iso")])
     if args.plot:
         import matplotlib.pyplot as plt
 
@@ -182,3 +192,10 @@ def _run_bearing(inp, k: int, args) -> int:
     else:
         print_bearing_search(r, k)
     return EXIT_OK if r.ok else EXIT_FAILED_CHECK
+
+
+def _name(c) -> str:
+    """How a candidate is named in the tables: 'H7/s6', or 'FN2 (H7/s6)' for an ASME B4.1 class."""
+    if c.basis.startswith("ANSI"):
+        return f"{c.basis.split()[-1]} ({c.hole}/{c.shaft})"
+    return f"{c.hole}/{c.shaft}"

@@ -330,7 +330,8 @@ def plain_samples_needed(p: float, rel_err: float, confidence: float | None = 0.
     Returns
     -------
     float
-        Sample count (rounded up) [-].
+        Sample count (rounded up) [-]; ``inf`` when ``p`` is so small that the count
+        exceeds the largest float.
 
     References
     ----------
@@ -347,7 +348,8 @@ def plain_samples_needed(p: float, rel_err: float, confidence: float | None = 0.
     if not (0 < p < 1) or not rel_err > 0:
         raise ValueError("need 0 < p < 1 and rel_err > 0")
     z2 = 1.0 if confidence is None else stats.norm.ppf(0.5 + confidence / 2) ** 2
-    return float(math.ceil(z2 * (1 - p) / (rel_err ** 2 * p) - 1e-9))
+    n = z2 * (1 - p) / (rel_err ** 2 * p) - 1e-9
+    return float(math.ceil(n)) if math.isfinite(n) else math.inf  # p near 5e-324: beyond any count
 
 
 def dkw_epsilon(n: int, alpha: float = 1e-3) -> float:

@@ -27,6 +27,8 @@ __all__ = [
     "thermal_preload_change", "permissible_assembly_preload", "thread_torque", "tightening_torque",
     "torque_shigley", "reduced_stress", "fatigue_limit_rolled_before", "fatigue_limit_rolled_after",
     "shear_area_internal", "shear_area_external", "min_engagement", "pattern_loads",
+    "friction_scatter_factor", "slip_safety", "iso965_tolerances", "shear_area_nut_thread",
+    "shear_area_bolt_thread", "nut_dilation_factor", "thread_bending_factors", "engagement_r11",
 ]
 
 D2_FACTOR = 0.649519  # ISO 724: d2 = d - 0.649519 P  (3/8·√3)
@@ -880,3 +882,256 @@ def pattern_loads(x, y, F_axial, M_tilt, F_transverse, T_axis, n_dir=360):
         tors = np.inf if abs(T_axis) > 0 else 0.0
     FQ = abs(F_transverse) / n + tors
     return float(FA), float(FQ)
+
+
+# --------------------------------------------------------------------------- preload scatter and slip
+
+def friction_scatter_factor(P, d2, D_Km, mu_G_min, mu_G_max, mu_K_min, mu_K_max):
+    """Preload scatter from the friction range alone under one tightening torque.
+
+    .. math:: \\alpha_\\mu = \\frac{F_M(\\mu_{min})}{F_M(\\mu_{max})}
+              = \\frac{0.16\\,P + 0.58\\,d_2\\,\\mu_{G,max} + \\mu_{K,max} D_{Km}/2}
+                     {0.16\\,P + 0.58\\,d_2\\,\\mu_{G,min} + \\mu_{K,min} D_{Km}/2}
+
+    The same torque M_A gives F_M = M_A/(0.16 P + 0.58 d2 μG + μK DKm/2), so the preload at the
+    lowest and at the highest friction differ by this ratio. VDI 2230 defines the tightening factor
+    as αA = F_M,max/F_M,min (Section 5.4.3); a torque-controlled joint whose friction range is wider
+    than the one Table A8 assumes scatters at least by α_μ.
+
+    Parameters
+    ----------
+    P, d2, D_Km : float or ndarray — pitch, pitch diameter, friction diameter of the bearing face [mm]
+    mu_G_min, mu_G_max, mu_K_min, mu_K_max : float or ndarray — friction range of thread and head [-]
+
+    Returns
+    -------
+    float or ndarray — α_μ ≥ 1 [-]
+
+    References
+    ----------
+    VDI 2230 Part 1:2015, Section 5.4.3 (αA = F_M,max/F_M,min) and Section 5.5.1, eq. for M_A
+    (also ISO 16047:2005).
+
+    >>> round(float(friction_scatter_factor(1.0, 5.35, 7.99, 0.08, 0.20, 0.08, 0.20)), 3)
+    2.17
+    """
+    lo = tightening_torque(1.0, P, d2, mu_G_min, mu_K_min, D_Km)
+    hi = tightening_torque(1.0, P, d2, mu_G_max, mu_K_max, D_Km)
+    return hi / lo
+
+
+def slip_safety(F_KR_min, q_F, mu_T, F_Q):
+    """Safety against slip of a joint loaded by a transverse force.
+
+    .. math:: S_G = \\frac{F_{KR,min}\\,q_F\\,\\mu_{T,min}}{F_{Q,max}} = \\frac{F_{KR,min}}{F_{KQ,erf}}
+
+    Parameters
+    ----------
+    F_KR_min : float or ndarray — smallest residual clamp load [N]
+    q_F : float or ndarray — number of interfaces transmitting the force [-]
+    mu_T : float or ndarray — lowest coefficient of friction of the interfaces [-]
+    F_Q : float or ndarray — largest transverse force per screw [N]
+
+    Returns
+    -------
+    float or ndarray — S_G [-] (inf without transverse force)
+
+    References
+    ----------
+    VDI 2230 Part 1:2015, step R12 (S_G ≥ 1.2 static, ≥ 1.8 alternating transverse load).
+
+    >>> float(slip_safety(6000.0, 1, 0.1, 400.0))
+    1.5
+    """
+    F_Q = np.asarray(F_Q, float)
+    with np.errstate(divide="ignore", invalid="ignore"):
+        return np.where(F_Q > 0, np.asarray(F_KR_min, float) * q_F * mu_T / np.where(F_Q > 0, F_Q, 1.0), np.inf)
+
+
+# --------------------------------------------------------------------------- engagement after R11
+
+def _size_range_mean(d):
+    """Geometric mean of the ISO 965-1 diameter range holding d (over 0.99 … up to 45 mm and on) [mm]."""
+    edges = np.array([0.99, 1.4, 2.8, 5.6, 11.2, 22.4, 45.0, 90.0, 180.0, 355.0])
+    d = np.asarray(d, float)
+    i = np.clip(np.searchsorted(edges, d, side="left"), 1, edges.size - 1)
+    return np.sqrt(edges[i - 1] * edges[i])
+
+
+def iso965_tolerances(d, P):
+    """Tolerance-position and grade-6 values of the 6g/6H fit of an ISO metric thread.
+
+    From the formulas of ISO 965-1 (the printed tables round them to R40 numbers; the unrounded
+    values differ by up to about 3 %):
+
+    .. math::
+        es_g = -(15 + 11P)\\;\\mu m,\\quad T_d(6) = 180P^{2/3} - 3.15/\\sqrt{P},\\quad
+        T_{d2}(6) = 90 P^{0.4} d_m^{0.1},
+
+        T_{D2}(6) = 1.32\\,T_{d2}(6),\\quad T_{D1}(6) = 433P - 190P^{1.22}\\ (P < 1),\\;
+        230 P^{0.7}\\ (P \\ge 1)
+
+    with d_m the geometric mean of the diameter range that holds d (P in mm, values in µm).
+
+    Parameters
+    ----------
+    d : float or ndarray — nominal diameter [mm]
+    P : float or ndarray — pitch [mm]
+
+    Returns
+    -------
+    tuple of ndarray — (es, Td, Td2, TD1, TD2) [mm]; es ≤ 0 is the upper deviation of the 6g
+    external thread; the 6H internal thread has EI = 0.
+
+    References
+    ----------
+    ISO 965-1:2013, clauses on fundamental deviations (es of g) and tolerance grades (formulas for
+    Td, Td2, TD1, TD2) — # from memory.
+
+    >>> [round(float(x) * 1000) for x in iso965_tolerances(4.0, 0.7)]
+    [-23, 138, 90, 180, 118]
+    """
+    d = np.asarray(d, float)
+    P = np.asarray(P, float)
+    es = -(15.0 + 11.0 * P)
+    Td = 180.0 * P ** (2.0 / 3.0) - 3.15 / np.sqrt(P)
+    Td2 = 90.0 * P ** 0.4 * _size_range_mean(d) ** 0.1
+    TD2 = 1.32 * Td2
+    TD1 = np.where(P < 1.0, 433.0 * P - 190.0 * P ** 1.22, 230.0 * P ** 0.7)
+    return tuple(np.asarray(x) / 1000.0 for x in (es, Td, Td2, TD1, TD2))
+
+
+def shear_area_nut_thread(d_min, D2_max, P, m):
+    """Shear area of the internal (nut or housing) thread at the screw's smallest major diameter.
+
+    .. math:: A_{SGM} = \\pi\\,d_{min}\\,\\frac{m_{eff}}{P}\\left[\\frac{P}{2}
+              + (d_{min} - D_{2,max})\\tan 30^\\circ\\right]
+
+    References
+    ----------
+    VDI 2230 Part 1:2015, Section 5.5.5.2 (R11), shear area of the nut thread — # from memory.
+
+    >>> round(float(shear_area_nut_thread(10.0, 9.026, 1.5, 1.0)), 2)
+    27.49
+    """
+    d_min = np.asarray(d_min, float)
+    P = np.asarray(P, float)
+    return np.pi * d_min * np.asarray(m, float) / P * (P / 2.0 + (d_min - np.asarray(D2_max, float))
+                                                        * np.tan(np.pi / 6.0))
+
+
+def shear_area_bolt_thread(D1_max, d2_min, P, m):
+    """Shear area of the external (screw) thread at the internal thread's largest minor diameter.
+
+    .. math:: A_{SGS} = \\pi\\,D_{1,max}\\,\\frac{m_{eff}}{P}\\left[\\frac{P}{2}
+              + (d_{2,min} - D_{1,max})\\tan 30^\\circ\\right]
+
+    References
+    ----------
+    VDI 2230 Part 1:2015, Section 5.5.5.2 (R11), shear area of the bolt thread — # from memory.
+
+    >>> round(float(shear_area_bolt_thread(8.376, 9.026, 1.5, 1.0)), 2)
+    19.74
+    """
+    D1 = np.asarray(D1_max, float)
+    P = np.asarray(P, float)
+    return np.pi * D1 * np.asarray(m, float) / P * (P / 2.0 + (np.asarray(d2_min, float) - D1)
+                                                     * np.tan(np.pi / 6.0))
+
+
+def nut_dilation_factor(s_over_d):
+    """Nut dilation factor C1 (the nut's widening under load lowers its stripping strength).
+
+    .. math:: C_1 = 3.8\\,\\frac{s}{d} - \\left(\\frac{s}{d}\\right)^2 - 2.61
+              \\quad (1.4 \\le s/d < 1.9),\\qquad C_1 = 1\\quad (s/d \\ge 1.9)
+
+    A tapped hole in a housing has no nut to widen: s/d = ∞ gives C1 = 1.
+
+    References
+    ----------
+    VDI 2230 Part 1:2015, Section 5.5.5.2 (R11) — # from memory.
+
+    >>> round(float(nut_dilation_factor(1.6)), 3)
+    0.91
+    >>> float(nut_dilation_factor(np.inf))
+    1.0
+    """
+    r = np.asarray(s_over_d, float)
+    with np.errstate(invalid="ignore"):
+        c = 3.8 * r - r * r - 2.61
+    return np.where(r >= 1.9, 1.0, c)
+
+
+def thread_bending_factors(R_S):
+    """Thread-bending factors C2 (screw thread) and C3 (internal thread) from the strength ratio R_S.
+
+    .. math::
+        C_2 = 5.594 - 13.682 R_S + 14.107 R_S^2 - 6.057 R_S^3 + 0.9353 R_S^4\\quad (1 < R_S \\le 2.2),
+        \\qquad C_2 = 0.897\\quad (R_S \\le 1)
+
+        C_3 = 0.728 + 1.769 R_S - 2.896 R_S^2 + 1.296 R_S^3\\quad (0.4 < R_S < 1),
+        \\qquad C_3 = 0.897\\quad (R_S \\ge 1)
+
+    with R_S = τ_BM·A_SGM/(τ_BS·A_SGS) (internal over external thread). Outside the ranges the
+    end values are kept (C2 at R_S = 2.2, C3 at R_S = 0.4).
+
+    References
+    ----------
+    VDI 2230 Part 1:2015, Section 5.5.5.2 (R11), after Alexander's stripping model — # from memory.
+
+    >>> [round(float(c), 3) for c in thread_bending_factors(1.0)]
+    [0.897, 0.897]
+    """
+    R = np.asarray(R_S, float)
+    r2 = np.clip(R, 1.0, 2.2)
+    C2 = np.where(R <= 1.0, 0.897, 5.594 - 13.682 * r2 + 14.107 * r2 ** 2 - 6.057 * r2 ** 3 + 0.9353 * r2 ** 4)
+    r3 = np.clip(R, 0.4, 1.0)
+    C3 = np.where(R >= 1.0, 0.897, 0.728 + 1.769 * r3 - 2.896 * r3 ** 2 + 1.296 * r3 ** 3)
+    return C2, C3
+
+
+def engagement_r11(As, Rm_S, tauB_S, tauB_M, d, P, d_min, d2_min, D1_max, D2_max, s_over_d=np.inf,
+                   allowance=0.0):
+    """Minimum length of engagement after VDI 2230 R11: the screw breaks before either thread strips.
+
+    Steps: shear areas per mm at the tolerance limits (:func:`shear_area_nut_thread`,
+    :func:`shear_area_bolt_thread`); strength ratio R_S = τ_BM·a_SGM/(τ_BS·a_SGS); C1, C2, C3;
+    m_eff = R_m·A_s / min(τ_BM·a_SGM·C1·C3, τ_BS·a_SGS·C1·C2); the length to put on the drawing
+    m_ges = m_eff + the allowance for the countersink of the hole and the chamfered screw end.
+    C2 and C3 are taken at most 1 (see the code comment).
+
+    Parameters
+    ----------
+    As, Rm_S : float — stress area [mm²], tensile strength of the screw [MPa]
+    tauB_S, tauB_M : float — shear strength of screw and internal-thread material [MPa]
+    d, P : float — nominal diameter, pitch [mm]
+    d_min, d2_min : float — smallest major and pitch diameter of the screw thread [mm]
+    D1_max, D2_max : float — largest minor and pitch diameter of the internal thread [mm]
+    s_over_d : float — width across flats of a nut over d (inf: tapped hole, C1 = 1) [-]
+    allowance : float — countersink and runout allowance added to m_eff [mm]
+
+    Returns
+    -------
+    dict — a_SGM, a_SGS [mm²/mm], R_S, C1, C2, C3 [-], F_mS [N], m_eff, m_ges [mm], ``strips``
+    ('internal' or 'external', the thread that governs)
+
+    References
+    ----------
+    VDI 2230 Part 1:2015, Section 5.5.5 and step R11 — # from memory.
+    """
+    a_M = float(shear_area_nut_thread(d_min, D2_max, P, 1.0))
+    a_S = float(shear_area_bolt_thread(D1_max, d2_min, P, 1.0))
+    R_S = tauB_M * a_M / (tauB_S * a_S)
+    C1 = float(nut_dilation_factor(s_over_d))
+    # the polynomials give C3 > 1 for R_S < 0.9 and C2 > 1 for R_S > 1.15; a factor that would raise
+    # the stripping strength above the shear strength of the area is not taken (conservative; the
+    # coefficients are recalled, not read)
+    C2, C3 = (min(float(c), 1.0) for c in thread_bending_factors(R_S))
+    F_mS = As * Rm_S
+    per_M = tauB_M * a_M * C1 * C3
+    per_S = tauB_S * a_S * C1 * C2
+    m_eff = F_mS / min(per_M, per_S)
+    return {"a_SGM": a_M, "a_SGS": a_S, "R_S": R_S, "C1": C1, "C2": C2, "C3": C3, "F_mS": F_mS,
+            "m_eff_internal": F_mS / per_M, "m_eff_external": F_mS / per_S, "m_eff": m_eff,
+            "allowance": float(allowance), "m_ges": m_eff + float(allowance),
+            "strips": "internal" if per_M <= per_S else "external"}

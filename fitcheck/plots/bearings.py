@@ -14,7 +14,7 @@ _LIMIT = "#444444"
 
 
 
-def plot_clearance_budget(result, ax=None) -> Figure:
+def plot_clearance_budget(result, ax=None, *, units: str = "SI") -> Figure:
     """Waterfall of the radial clearance [µm]: initial → fit-up → thermal → operating.
 
     Two waterfalls side by side: the tightest pairing (smallest clearance, the one the
@@ -46,7 +46,9 @@ def plot_clearance_budget(result, ax=None) -> Figure:
         ax = fig.add_subplot()
     else:
         fig = ax.figure
-    steps = clearance_budget(result)
+    from ._units import scale
+    k, lab = scale("um", units)
+    steps = {key: [v * k for v in vals] for key, vals in clearance_budget(result).items()}
     width = 0.36
     finite = all(math.isfinite(v) for s in steps.values() for v in s)
     for k, (key, color, label) in enumerate((("min", _MIN, "tightest pairing"),
@@ -58,17 +60,17 @@ def plot_clearance_budget(result, ax=None) -> Figure:
             alpha = 1.0 if i in (0, 3) else 0.55
             ax.bar(i + x0, b - a, width=width * 0.95, bottom=a, color=color, alpha=alpha,
                    label=label if i == 0 else None)
-            ax.annotate(f"{s[i]:.1f}", (i + x0, max(a, b)), ha="center", va="bottom", fontsize=7,
+            ax.annotate(f"{s[i]:.2f}" if units == "inch" else f"{s[i]:.1f}", (i + x0, max(a, b)), ha="center", va="bottom", fontsize=7,
                         xytext=(0, 2), textcoords="offset points")
         ax.plot([i + x0 for i in range(4)], s, color=color, lw=0.8, ls=":", marker="_")
     ax.margins(y=0.15)
     ax.axhline(0.0, color=_LIMIT, lw=0.8)
-    lim = getattr(result, "clearance_min_um", 0.0)
+    lim = getattr(result, "clearance_min_um", 0.0) * k
     if lim:
-        ax.axhline(lim, color=_LIMIT, lw=1.0, ls="--", label=f"limit {lim:g} µm")
+        ax.axhline(lim, color=_LIMIT, lw=1.0, ls="--", label=f"limit {lim:.3g} {lab}")
     ax.set_xticks(range(4), [f"initial\n{getattr(result, 'clearance_group', '')}", "fit-up",
                              "thermal", "operating"])
-    ax.set_ylabel("radial clearance [µm]")
+    ax.set_ylabel(f"radial clearance [{lab}]")
     name = getattr(result, "name", "") or getattr(result, "designation", "")
     ax.set_title(f"Clearance budget {name}".strip() + ("" if finite else " (no clearance group)"),
                  fontsize=10)

@@ -14,7 +14,7 @@ from pathlib import Path
 import streamlit as st
 
 import fitcheck
-from fitcheck.ui import state, unitsys
+from fitcheck.ui import state, unitsys, widgets
 
 HERE = Path(__file__).parent
 
@@ -49,17 +49,38 @@ def available() -> list[PageSpec]:
 
 
 def pages() -> dict[str, list]:
-    """``st.Page`` objects by section, for ``st.navigation``."""
-    out: dict[str, list] = {}
-    for i, p in enumerate(available()):
+    """``st.Page`` objects by section, for ``st.navigation``.
+
+    The address without a page (``/``) is a hidden page that opens the first page under its own
+    address, so every page, the first included, opens from its direct address (``/fit-limits``).
+    """
+    out: dict[str, list] = {"": [st.Page(_start, title="fitcheck", url_path="start", default=True,
+                                         visibility="hidden")]}
+    for p in available():
         out.setdefault(p.section, []).append(
-            st.Page(HERE / f"{p.module}.py", title=p.title, url_path=p.url_path, icon=p.icon,
-                    default=(i == 0)))
+            st.Page(HERE / f"{p.module}.py", title=p.title, url_path=p.url_path, icon=p.icon))
     return out
+
+
+def _start() -> None:
+    """The bare address: go on to the first page, keeping the address's parameters (case, units)."""
+    first = available()[0]
+    st.switch_page(HERE / f"{first.module}.py", query_params=dict(st.query_params))
+
+
+#: Metric cards wrap a long value or label instead of cutting it off; static tables wrap text.
+STYLE = """<style>
+[data-testid="stMetricValue"] > div, [data-testid="stMetricLabel"] > div,
+[data-testid="stMetricLabel"] p {white-space: normal !important; overflow: visible !important;
+  text-overflow: clip !important; overflow-wrap: anywhere;}
+[data-testid="stMetricValue"] {font-size: 1.55rem; line-height: 1.25;}
+[data-testid="stTable"] td, [data-testid="stTable"] th {white-space: normal; overflow-wrap: anywhere;}
+</style>"""
 
 
 def frame() -> None:
     """Before a page: open the working case, draw the sidebar (unit system, case name)."""
+    st.html(STYLE)
     state.init()
     ss = st.session_state
     with st.sidebar:
@@ -72,8 +93,8 @@ def frame() -> None:
         if isinstance(title, dict) and title:
             parts = [str(title.get(k, "")) for k in ("project", "part") if title.get(k)]
             rev = title.get("revision")
-            st.caption("Open case: **" + " — ".join(parts) + "**"
-                       + (f", rev. {rev}" if rev else ""))
+            st.caption("Open case: **" + " — ".join(widgets.esc(p) for p in parts) + "**"
+                       + (f", rev. {widgets.esc(rev)}" if rev else ""))
         st.caption(f"fitcheck {fitcheck.__version__}")
 
 

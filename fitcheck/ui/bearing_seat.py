@@ -86,11 +86,11 @@ def _suggestion(name: str, entry: dict) -> None:
     except InputError:
         return  # the field errors already say what is wrong
     with st.container(border=True):
-        st.markdown(f"**Suggested seats** for {rec.designation}, {rec.load.replace('_', ' ')} "
+        st.markdown(f"**Suggested seats** for {widgets.esc(rec.designation)}, {rec.load.replace('_', ' ')} "
                     f"load, {rec.load_level} level, {rec.housing_group} housing: "
                     f"shaft **{rec.shaft}**, housing **{rec.housing}**")
         for n in rec.notes:
-            st.caption(n)
+            st.caption(widgets.esc(n))
         st.caption(rec.reference)
         chosen = (entry.get("shaft", "auto"), entry.get("housing", "auto"))
         if chosen != (rec.shaft, rec.housing):
@@ -99,9 +99,12 @@ def _suggestion(name: str, entry: dict) -> None:
 
 
 def _results(r: bearings.BearingSeatResult, system: str, name: str) -> None:
-    widgets.verdict_banner(r.ok, checks.worst(r.checks),
-                           system)
-    st.subheader(f"{r.designation}: shaft {r.shaft_class}, housing {r.housing_class}")
+    widgets.verdict_banner(r.ok, checks.worst(r.checks), system, checks=r.checks, table=TABLE,
+                           name=name)
+    if r.ok:
+        widgets.search_link(TABLE, name)
+    st.subheader(f"{widgets.esc(r.designation)}: shaft {widgets.esc(r.shaft_class)}, "
+                 f"housing {widgets.esc(r.housing_class)}")
     c = st.columns(2)
     c[0].metric("Operating clearance", unitsys.show_range(r.operating_clearance_um, "small_length",
                                                           system, digits=3),
@@ -144,7 +147,7 @@ def _details(r: bearings.BearingSeatResult, system: str, name: str) -> None:
     st.subheader("Checks")
     widgets.show_checks(r.checks, system, key=f"{PREFIX}.checks")
     for n in r.notes:
-        st.caption("• " + n)
+        st.caption("• " + widgets.esc(n))
     from fitcheck.ui import shaft_box
     shaft_box.render(getattr(r, "shaft", None), system, key=f"{PREFIX}.shaft", notes=False)
     st.subheader("Clearance budget")

@@ -17,17 +17,20 @@ from fitcheck import case as casefile
 from fitcheck import report
 from fitcheck.errors import InputError, InputErrors
 from fitcheck.tomlread import read_toml_bytes
-from fitcheck.ui import app, state, widgets
+from fitcheck.ui import app, inch, state, widgets
 
 TITLE_KEYS = casefile.TITLE_KEYS
 PENDING = "cf.pending"      # a parsed upload with problems, waiting for "open anyway"
 SEEN = "cf.seen"            # file id of the last upload handled
+SOURCE = "cf.source_text"   # the text of the opened file (its comments are kept on saving)
 
 
 def case_text() -> str:
-    """The working case as a case file: a header with the caution, then the TOML."""
+    """The working case as a case file: the opened file with the changed values rewritten
+    (its comments kept), or a header with the caution and the TOML. Raises for a value the
+    case loader refuses, so such a case is never saved."""
     head = "\n".join("# " + line for line in _wrap("fitcheck design case. " + fitcheck.CAUTION))
-    return head + "\n" + state.doc_text(state.doc())
+    return casefile.document_text(state.doc(), st.session_state.get(SOURCE), head + "\n")
 
 
 def _wrap(text: str, width: int = 96) -> list[str]:
@@ -84,8 +87,10 @@ def _handle_upload(upload) -> None:
     except (InputError, InputErrors) as exc:
         ss["cf.upload_errors"] = state.errors_by_field(exc)
         ss[PENDING] = doc
+        ss["cf.pending_text"] = raw.decode("utf-8")
         return
     state.replace_doc(doc)
+    ss[SOURCE] = raw.decode("utf-8")
     ss.pop("cf.upload_errors", None)
     ss.pop(PENDING, None)
     ss["cf.opened"] = upload.name
@@ -96,12 +101,22 @@ def _open_pending() -> None:
     doc = ss.pop(PENDING, None)
     if doc is not None:
         state.replace_doc(doc)
+        ss[SOURCE] = ss.pop("cf.pending_text", None)
         ss.pop("cf.upload_errors", None)
         ss["cf.opened"] = "the uploaded file (with the problems marked on the joint pages)"
 
 
+def _new_case() -> None:
+    """An empty case: the format version and a title block to fill in, no joints."""
+    state.replace_doc({"format_version": casefile.FORMAT_VERSION,
+                       "title": {k: "" for k in ("project", "part")}})
+    st.session_state["cf.opened"] = "a new, empty case: fill in its title block and add joints " \
+        "on the pages Press fit, Bearing seats and Housing screws"
+
+
 def _restore_demo() -> None:
     state.replace_doc(state.demo_doc())
+    st.session_state[SOURCE] = casefile.demo_text()
     st.session_state["cf.opened"] = "the demo case"
 
 
@@ -117,21 +132,32 @@ def render() -> None:
                                   "replaces the open case; nothing in the file is executed.")
         _handle_upload(upload)
         if ss.get("cf.opened"):
-            st.success(f"Opened {ss.pop('cf.opened')}.")
+            st.success(f"Opened {widgets.esc(ss.pop('cf.opened'))}.")
         for e in ss.get("cf.upload_errors", []):
             st.error(widgets.error_text(e), icon=":material/error:")
         if ss.get(PENDING) is not None:
             st.button("Open it anyway and correct it here", key="cf.open_anyway",
                       on_click=_open_pending)
+        st.button("Start a new, empty case", key="cf.new", on_click=_new_case,
+                  icon=":material/note_add:", help="Replaces the open case with an empty one "
+                  "(title block only). Download your case first to keep it.")
         st.button("Restore the demo case", key="cf.demo", on_click=_restore_demo,
                   help="Replaces the open case with the demo (gearhead of a benchtop pump). "
                   "Download your case first to keep it.")
+        inch.demo_button()  # the inch demo (fitcheck/ui/inch.py)
         st.subheader("Save the case")
-        st.download_button("Download the case file (.toml)", case_text(),
-                           file_name=f"{file_stem()}.toml", mime="application/toml",
-                           key="cf.download_toml", icon=":material/download:")
-        with st.expander("Case file text"):
-            st.code(case_text(), language="toml")
+        try:
+            text = case_text()
+        except (InputError, InputErrors) as exc:
+            st.warning("The case file can be saved once these inputs are corrected:")
+            for e in state.errors_by_field(exc):
+                st.error(widgets.error_text(e), icon=":material/error:")
+        else:
+            st.download_button("Download the case file (.toml)", text,
+                               file_name=f"{file_stem()}.toml", mime="application/toml",
+                               key="cf.download_toml", icon=":material/download:")
+            with st.expander("Case file text"):
+                st.code(text, language="toml")
         st.subheader("Calculation report")
         _report_buttons()
     with right:

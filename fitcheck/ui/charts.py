@@ -16,15 +16,73 @@ import streamlit as st
 
 from fitcheck.ui import unitsys
 
+#: Chart axes of small lengths in inch units read in thousandths of an inch (0.0012 in -> 1.2).
+THOU = "0.001 in"
+ZONE_COLORS = ("#3b6ea5", "#b5472f")
+
 
 def factor(kind: str, system: str) -> float:
-    """Display-unit magnitude of one core unit of ``kind`` (all chart quantities are linear)."""
-    return unitsys.magnitude(1.0, kind, system)
+    """Axis magnitude of one core unit of ``kind`` (all chart quantities are linear).
+
+    Small lengths in inch units are plotted in thousandths of an inch (see :data:`THOU`).
+    """
+    f = unitsys.magnitude(1.0, kind, system)
+    return f * 1000.0 if (kind == "small_length" and system == "inch") else f
 
 
 def label(text: str, kind: str, system: str) -> str:
-    """Axis title with the display unit, e.g. ``"stress [MPa]"``."""
+    """Axis title with the axis unit, e.g. ``"stress [MPa]"``, ``"interference [0.001 in]"``."""
+    if kind == "small_length" and system == "inch":
+        return f"{text} [{THOU}]"
     return f"{text} [{unitsys.symbol(unitsys.unit_for(kind, system))}]"
+
+
+def small_factor(system: str) -> tuple[float, str]:
+    """Axis magnitude of one µm and the axis unit's name (µm, or thousandths of an inch)."""
+    return factor("small_length", system), ("µm" if system != "inch" else THOU)
+
+
+def _color(colors: Mapping[str, str] | None, present) -> dict:
+    """A colour scale listing only the series drawn (legend entries = lines on the chart)."""
+    if not colors:
+        return {}
+    shown = [k for k in colors if k in set(present)]
+    return {"scale": {"domain": shown, "range": [colors[k] for k in shown]}}
+
+
+def zones(df: pd.DataFrame, *, y_title: str, colors: Mapping[str, str], key: str, title: str = "",
+          height: int = 300) -> None:
+    """Tolerance zones as floating bars from ``lower`` to ``upper`` beside the zero line."""
+    enc = {
+        "x": {"field": "zone", "type": "nominal", "title": None, "sort": None,
+              "axis": {"labelAngle": 0}},
+        "y": {"field": "lower", "type": "quantitative", "title": y_title},
+        "y2": {"field": "upper"},
+        "color": {"field": "zone", "type": "nominal", "title": None, "legend": None,
+                  **_color(colors, df["zone"])},
+        "tooltip": [{"field": "zone", "type": "nominal"},
+                    {"field": "upper", "type": "quantitative", "format": ".4~g",
+                     "title": "upper deviation"},
+                    {"field": "lower", "type": "quantitative", "format": ".4~g",
+                     "title": "lower deviation"}],
+    }
+    layers = [{"mark": {"type": "bar", "opacity": 0.8, "width": {"band": 0.5}}, "encoding": enc},
+              {"mark": {"type": "text", "dy": -7, "fontSize": 11},
+               "encoding": {"x": enc["x"], "y": {"field": "upper", "type": "quantitative"},
+                            "text": {"field": "upper", "type": "quantitative",
+                                     "format": "+.4~g"}}},
+              {"mark": {"type": "text", "dy": 12, "fontSize": 11},
+               "encoding": {"x": enc["x"], "y": {"field": "lower", "type": "quantitative"},
+                            "text": {"field": "lower", "type": "quantitative",
+                                     "format": "+.4~g"}}},
+              {"data": {"values": [{"v": 0.0, "t": "zero line (nominal size)"}]},
+               "mark": {"type": "rule", "color": "#555555", "strokeWidth": 1.5},
+               "encoding": {"y": {"field": "v", "type": "quantitative"}}}]
+    spec = {"height": height, "layer": layers,
+            "config": {"axis": {"grid": True, "gridOpacity": 0.4}}}
+    if title:
+        spec["title"] = {"text": title, "fontSize": 13, "anchor": "start"}
+    st.vega_lite_chart(df, spec, width="stretch", key=key)
 
 
 def lines(df: pd.DataFrame, *, x: str, y: str, series: str, x_title: str, y_title: str,
@@ -42,9 +100,8 @@ def lines(df: pd.DataFrame, *, x: str, y: str, series: str, x_title: str, y_titl
         "x": {"field": x, "type": "quantitative", "title": x_title},
         "y": {"field": y, "type": "quantitative", "title": y_title},
         "color": {"field": series, "type": "nominal", "title": None,
-                  "legend": {"orient": "bottom", "columns": 3},
-                  **({"scale": {"domain": list(colors), "range": list(colors.values())}}
-                     if colors else {})},
+                  "legend": {"orient": "bottom", "columns": 3, "labelLimit": 260},
+                  **_color(colors, df[series])},
         "tooltip": [{"field": series, "type": "nominal"},
                     {"field": x, "type": "quantitative", "format": ".4~g", "title": x_title},
                     {"field": y, "type": "quantitative", "format": ".4~g", "title": y_title}],
@@ -100,9 +157,7 @@ def waterfall(df: pd.DataFrame, *, stage: str, group: str, start: str, end: str,
         "y": {"field": start, "type": "quantitative", "title": y_title},
         "y2": {"field": end},
         "color": {"field": group, "type": "nominal", "title": None,
-                  "legend": {"orient": "bottom"},
-                  **({"scale": {"domain": list(colors), "range": list(colors.values())}}
-                     if colors else {})},
+                  "legend": {"orient": "bottom"}, **_color(colors, df[group])},
         "tooltip": [{"field": group, "type": "nominal"}, {"field": stage, "type": "nominal"},
                     {"field": end, "type": "quantitative", "format": ".3~f",
                      "title": "clearance after"}],
@@ -130,6 +185,8 @@ def unit_factor(unit: str, system: str) -> tuple[float, str]:
 
     target = unitsys._target_unit(unit, system)  # the unit the tables of the system use
     f = 1.0 if target == unit else float(Q_(1.0, unit).to(target).magnitude)
+    if system == "inch" and target == "in" and unit in ("um", "micrometer", "µm"):
+        return f * 1000.0, THOU  # small lengths read in thousandths of an inch
     return f, unitsys.symbol(target)
 
 

@@ -8,12 +8,14 @@ size (``fitcheck.fits.valid_classes``).
 
 from __future__ import annotations
 
+import re
+
 import pandas as pd
 import streamlit as st
 
 from fitcheck import fits
 from fitcheck.errors import InputError
-from fitcheck.ui import app, state, unitsys, widgets
+from fitcheck.ui import app, charts, inch, state, unitsys, widgets
 from fitcheck.units import to_core
 
 DEFAULT = {"size": "25 mm", "hole": "H7", "shaft": "p6"}
@@ -32,14 +34,6 @@ def _classes(size_mm: float, feature: str) -> list[str]:
     return fits.valid_classes(size_mm, feature)
 
 
-@st.cache_data(show_spinner=False, max_entries=64)
-def _zone_png(key: str, _f: fits.Fit) -> bytes:
-    """The zone diagram of a fit (cached by its designation and limits in ``key``)."""
-    from fitcheck.plots.fits import plot_fit
-
-    return widgets.png(plot_fit(_f))
-
-
 @st.cache_data(show_spinner=False)
 def _preferred() -> list[fits.PreferredFit]:
     return fits.preferred_fits()
@@ -50,9 +44,28 @@ def designation(v: dict) -> str:
     return f"{v['size']} {classes}".strip()
 
 
+_SIZE_FIRST = re.compile(r"^\s*([-+]?(?:\d+\.?\d*|\.\d+)(?:[eE][-+]?\d+)?\s*[A-Za-z\"]*)\s+\S")
+
+
+_BARE = re.compile(r"^[-+]?(?:\d+\.?\d*|\.\d+)(?:[eE][-+]?\d+)?$")
+
+
 def _from_designation(text: str) -> dict:
-    """Size and classes from a typed designation (``fits.parse`` decides what is valid)."""
-    d = fits.parse(text)
+    """Size and classes from a typed designation (``fits.parse`` decides what is valid).
+
+    When the designation does not read and it starts with a size that is not a positive length,
+    the message is the one about the size (``'-5 mm H7/p6'``: the size must be > 0).
+    """
+    try:
+        d = fits.parse(text)
+    except InputError:
+        m = _SIZE_FIRST.match(text or "")
+        if m:
+            size = m.group(1).strip()
+            if _BARE.match(size):  # a bare number is a size in mm (ISO 286)
+                size += " mm"
+            to_core(size, "length", "nominal size", lo=0.0, lo_open=True)
+        raise
     size = (unitsys.show(d.nominal_mm, "length", "inch", digits=6) if d.inch
             else f"{d.nominal_mm:g} mm")
     return {"size": size, "hole": d.hole or NONE, "shaft": d.shaft or NONE}
@@ -156,7 +169,9 @@ def render() -> None:
     with right:
         hole = v["hole"] if v["hole"] != NONE else None
         shaft = v["shaft"] if v["shaft"] != NONE else None
-        if size_error is not None:
+        if ss.get("fl.text_error") is not None:
+            st.info("Correct the designation to see the limits.")
+        elif size_error is not None:
             st.info("Enter a valid nominal size to see the limits.")
         elif hole is None and shaft is None:
             st.info("Pick a hole class, a shaft class or both.")
@@ -167,6 +182,7 @@ def render() -> None:
                 st.error(widgets.error_text(e), icon=":material/error:")
             else:
                 _show_fit(f, system)
+    inch.ansi_section(_show_fit, system)  # ASME B4.1 classes (fitcheck/ui/inch.py)
     with st.expander("Preferred fits", expanded=False):
         st.dataframe(pd.DataFrame([{"basis": p.basis, "fit": p.fit, "use": p.description,
                                     "source": p.source} for p in prefs]),
@@ -183,7 +199,7 @@ def _class_select(label: str, key: str, options: list[str], current: str) -> Non
 
 
 def _show_fit(f: fits.Fit, system: str) -> None:
-    st.subheader(f"{f.designation}" + (f" — {f.kind} fit" if f.kind else ""))
+    st.subheader(f"{widgets.esc(f.designation)}" + (f" — {f.kind} fit" if f.kind else ""))
     show = lambda um: unitsys.show(um, "small_length", system)  # noqa: E731
     if f.kind is not None:
         c = st.columns(3)
@@ -217,7 +233,17 @@ def _show_fit(f: fits.Fit, system: str) -> None:
             f"{d['upper_in']:+.5f}", f"{d['lower_in']:+.5f}", f"{d['max_in']:.5f}",
             f"{d['min_in']:.5f}", f"{unitsys.magnitude(d['it_um'], 'small_length', 'inch'):.5f}"]
     st.dataframe(pd.DataFrame(table), hide_index=True, width="stretch", key="fl.limits")
-    widgets.image(_zone_png(repr(f.to_dict()), f), "tolerance zones of hole and shaft")
+    _zone_chart(f, system)
+
+
+def _zone_chart(f: fits.Fit, system: str) -> None:
+    """The tolerance zones of hole and shaft about the zero line (limits from the library)."""
+    fu, unit = charts.small_factor(system)
+    rows = [{"zone": f"{z.feature} {z.cls}", "lower": z.lower_um * fu, "upper": z.upper_um * fu}
+            for z in (f.hole, f.shaft) if z is not None]
+    colors = {r["zone"]: charts.ZONE_COLORS[i] for i, r in enumerate(rows)}
+    charts.zones(pd.DataFrame(rows), y_title=f"deviation from the nominal size [{unit}]",
+                 colors=colors, title=f"Tolerance zones, {f.designation}", key="fl.zones")
 
 
 if __name__ == "__main__":

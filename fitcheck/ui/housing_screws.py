@@ -150,9 +150,11 @@ def render() -> None:
 
 
 def _summary(r: screws.ScrewJointResult, system: str, name: str) -> None:
-    widgets.verdict_banner(r.ok, checks.worst(r.checks),
-                           system)
-    st.subheader(f"{r.name or 'Joint'}: {r.thread} – {r.property_class}")
+    widgets.verdict_banner(r.ok, checks.worst(r.checks), system, checks=r.checks, table=TABLE,
+                           name=name)
+    st.subheader(f"{widgets.esc(r.name or 'Joint')}: {widgets.esc(r.thread)} – "
+                 f"{widgets.esc(r.property_class)}")
+    st.markdown(f"**{widgets.esc(unitsys.words(r.tightening_instruction))}**")
     f = lambda x: unitsys.show(x, "force", system)  # noqa: E731
     c = st.columns(3)
     c[0].metric("Permissible preload F_M,zul", f(r.F_M_zul),
@@ -190,7 +192,7 @@ def _joint_chart(r: screws.ScrewJointResult, system: str, name: str) -> None:
                  title=f"Joint diagram at the smallest preload in service, Φ = {r.load_factor:.3f}",
                  key=f"{PREFIX}.{name}.joint_chart",
                  colors={"screw": "#2b6cb0", "clamped parts": "#d97706",
-                         "screw under F_A": "#2b6cb0", "F_A": "#c53030", "F_KR": "#2f855a"})
+                         "screw under F_A": "#6b46c1", "F_A": "#c53030", "F_KR": "#2f855a"})
 
 
 def _details(r: screws.ScrewJointResult, system: str, name: str) -> None:

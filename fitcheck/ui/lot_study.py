@@ -24,7 +24,18 @@ import streamlit as st
 from fitcheck import case as casefile
 from fitcheck import checks, fits, study
 from fitcheck.errors import InputError, InputErrors
-from fitcheck.search import search_bearing_seat, search_fits
+from fitcheck.search import (
+    BEARING_HOUSING_GRADES,
+    BEARING_HOUSING_LETTERS,
+    BEARING_SHAFT_GRADES,
+    BEARING_SHAFT_LETTERS,
+    DEFAULT_HOLE_GRADES,
+    DEFAULT_HOLES,
+    DEFAULT_SHAFT_GRADES,
+    DEFAULT_SHAFTS,
+    search_bearing_seat,
+    search_fits,
+)
 from fitcheck.tomlread import read_toml_bytes
 from fitcheck.ui import app, charts, joints, state, unitsys, widgets
 
@@ -79,10 +90,12 @@ def _study(text: str, settings: tuple) -> tuple[study.StudyResult | None, list[t
 
 
 @st.cache_data(show_spinner=False, max_entries=64)
-def _search(text: str, table: str):
+def _search(text: str, table: str, admitted: tuple = ()):
     try:
         inp = _joint_input(text, table)
-        return (search_fits(inp) if table == "pressfit" else search_bearing_seat(inp)), []
+        kw = dict(admitted)
+        return (search_fits(inp, **kw) if table == "pressfit" else
+                search_bearing_seat(inp, **kw)), []
     except (InputError, InputErrors) as exc:
         return None, _errs(exc)
 
@@ -102,6 +115,7 @@ def render() -> None:
                 "How often a production lot of a press fit slips or yields when sizes, friction, "
                 "roughness and temperature scatter — and which ISO 286 fit (or bearing seat "
                 "class) passes every check.")
+    _arrival()
     chosen = _pick()
     if chosen is None:
         return
@@ -119,13 +133,36 @@ def render() -> None:
     if msg:
         st.success(msg, icon=":material/check_circle:")
     if table == "pressfit":
-        tab_study, tab_search = st.tabs(["Lot study", "Fit search"])
+        tab_study, tab_search = st.tabs(["Lot study", "Fit search"],
+                                        default=st.session_state.get(TAB))
         with tab_study:
             _study_section(name, text)
         with tab_search:
             _fit_search_section(name, text)
     else:
         _seat_search_section(name, text)
+
+
+TAB = f"{PREFIX}.tab"  # the tab opened first (the fit search after a link from a joint page)
+
+
+def _arrival() -> None:
+    """Coming from a joint page's link (address ``?search=pressfit:<name>``): select that joint,
+    open its search and run it."""
+    qp = st.query_params
+    token = qp.get(widgets.QP_SEARCH)
+    if token is None:
+        return
+    del qp[widgets.QP_SEARCH]
+    table, _, name = token.partition(":")
+    if table not in KINDS or name not in joints.names(table):
+        st.warning(f"The case has no {KINDS.get(table, 'joint')} named {widgets.esc(name)}.")
+        return
+    ss = st.session_state
+    label = f"{KINDS[table]}: {name}"
+    ss[f"{PREFIX}.joint"] = ss[f"{PREFIX}.joint.value"] = label
+    ss[TAB] = "Fit search"
+    ss[SEARCH_RUN] = _token(state.doc_text(state.single_joint_doc(table, name)), table)
 
 
 def _pick() -> tuple[str, str] | None:
@@ -361,7 +398,7 @@ def p_text(x: float) -> str:
 
 def _study_results(r: study.StudyResult, system: str, name: str) -> None:
     s = r.settings
-    st.subheader(f"{r.joint}: {r.fit or 'given interference'} — {r.samples:,} samples, "
+    st.subheader(f"{widgets.esc(r.joint)}: {widgets.esc(r.fit or 'given interference')} — {r.samples:,} samples, "
                  f"seed {s.seed}")
     if r.targets:
         worst = checks.worst(r.checks)  # the smallest margin
@@ -418,7 +455,7 @@ def _study_results(r: study.StudyResult, system: str, name: str) -> None:
                                     "meaning": v.description} for v in r.variables]),
                      hide_index=True, width="stretch", key=f"{PREFIX}.variables")
     for n in r.notes:
-        st.caption(f"Note: {n}")
+        st.caption(f"Note: {widgets.esc(n)}")
 
 
 def _named_limits(hist: dict, r: study.StudyResult) -> dict:
@@ -526,10 +563,74 @@ def _take_fit(name: str, hole: str, shaft: str, nominal_mm: float) -> None:
     for k in dropped:  # a fit replaces explicit interference limits
         entry.pop(k)
         ss[joints.wkey("pf", name, k)] = ""
-    ss[SEARCH_RUN] = state.doc_text(state.single_joint_doc("pressfit", name))
-    ss[TAKEN] = (f"Fit **{text}** is now the fit of *{name}* in the case"
+    ss[SEARCH_RUN] = _token(state.doc_text(state.single_joint_doc("pressfit", name)), "pressfit")
+    ss[TAKEN] = (f"Fit **{widgets.esc(text)}** is now the fit of *{widgets.esc(name)}* in the case"
                  + (" (its interference limits were removed)" if dropped else "")
                  + "; the page *Press fit* shows it.")
+
+
+ADMIT = f"{PREFIX}.admit"   # the admitted fit set, kept across page switches
+BASES = {"hole": "hole basis", "shaft": "shaft basis"}
+FIT_SET = {"bases": ["hole", "shaft"], "holes": list(DEFAULT_HOLES),
+           "shaft_grades": list(DEFAULT_SHAFT_GRADES), "shafts": list(DEFAULT_SHAFTS),
+           "hole_grades": list(DEFAULT_HOLE_GRADES)}
+SEAT_SET = {"shaft_letters": list(BEARING_SHAFT_LETTERS), "shaft_grades": list(BEARING_SHAFT_GRADES),
+            "housing_letters": list(BEARING_HOUSING_LETTERS),
+            "housing_grades": list(BEARING_HOUSING_GRADES)}
+GRADES = list(range(4, 12))
+HOLE_BASES = ["H5", "H6", "H7", "H8", "H9", "H10", "H11"]
+SHAFT_BASES = ["h4", "h5", "h6", "h7", "h8", "h9", "h10", "h11"]
+SHAFT_LETTERS = ["a", "b", "c", "cd", "d", "e", "ef", "f", "fg", "g", "h", "j", "js", "k", "m",
+                 "n", "p", "r", "s", "t", "u", "v", "x", "y", "z"]
+
+
+def _admitted(table: str) -> dict:
+    """The admitted set of the search as the library's keyword arguments (from the widgets)."""
+    ss = st.session_state
+    defaults = FIT_SET if table == "pressfit" else SEAT_SET
+    saved = ss.setdefault(ADMIT, {})
+    out = {}
+    for k, v in defaults.items():
+        wk = f"{ADMIT}.{table}.{k}"
+        if wk not in ss:
+            ss[wk] = list(saved.get((table, k), v))
+        saved[(table, k)] = list(ss[wk])
+        out[k] = tuple(ss[wk])
+    if table == "pressfit":
+        bases = out.pop("bases")
+        if "hole" not in bases:
+            out["holes"] = ()
+        if "shaft" not in bases:
+            out["shafts"] = ()
+    return out
+
+
+def _admitted_widgets(table: str) -> None:
+    """The admitted fit set: bases, basis classes, grades (and letters of bearing seats)."""
+    k = f"{ADMIT}.{table}"
+    with st.expander("Fits admitted to the search", icon=":material/tune:"):
+        if table == "pressfit":
+            st.pills("Systems", list(BASES), key=f"{k}.bases", selection_mode="multi",
+                     format_func=BASES.get, help="Hole-basis fits (H with every shaft letter), "
+                     "shaft-basis fits (h with every hole letter), or both.")
+            c = st.columns(2)
+            c[0].multiselect("Basis holes", HOLE_BASES, key=f"{k}.holes")
+            c[0].multiselect("Shaft grades (IT) with them", GRADES, key=f"{k}.shaft_grades")
+            c[1].multiselect("Basis shafts", SHAFT_BASES, key=f"{k}.shafts")
+            c[1].multiselect("Hole grades (IT) with them", GRADES, key=f"{k}.hole_grades")
+        else:
+            c = st.columns(2)
+            c[0].multiselect("Shaft letters", SHAFT_LETTERS, key=f"{k}.shaft_letters")
+            c[0].multiselect("Shaft grades (IT)", GRADES, key=f"{k}.shaft_grades")
+            c[1].multiselect("Housing letters", [x.upper() for x in SHAFT_LETTERS],
+                             key=f"{k}.housing_letters")
+            c[1].multiselect("Housing grades (IT)", GRADES, key=f"{k}.housing_grades")
+        st.caption("Only the classes ISO 286 defines at the joint's size are tried.")
+
+
+def _token(text: str, table: str) -> str:
+    """What a search result depends on: the joint's text and the admitted set."""
+    return text + "\n# admitted " + repr(sorted(_admitted(table).items()))
 
 
 def _search_button(label: str, text: str) -> bool:
@@ -538,18 +639,26 @@ def _search_button(label: str, text: str) -> bool:
         ss[SEARCH_RUN] = text
     if ss.get(SEARCH_RUN) != text:
         if SEARCH_RUN in ss:
-            st.info(f"The joint changed since the last search: press **{label}** again.")
+            st.info(f"The joint or the admitted fits changed since the last search: press "
+                    f"**{label}** again.")
         return False
     return True
 
 
 def _fit_search_section(name: str, text: str) -> None:
-    st.caption("Every hole-basis fit (H6, H7, H8 with shafts of grades 5 to 7) and shaft-basis fit "
-               "(h5, h6, h7 with holes of grades 6 to 8) that ISO 286 defines at the joint's "
-               "size, with the checks and required safeties of the press-fit page.")
-    if not _search_button("Search fits", text):
+    st.caption("Hole-basis fits (basis holes with shafts of every letter in the grades chosen) "
+               "and shaft-basis fits (basis shafts with holes of every letter) that ISO 286 "
+               "defines at the joint's size, with the checks and required safeties of the "
+               "press-fit page.")
+    admitted = _admitted("pressfit")  # seeds the widgets first
+    _admitted_widgets("pressfit")
+    if not (admitted["holes"] and admitted["shaft_grades"]) and \
+            not (admitted["shafts"] and admitted["hole_grades"]):
+        st.info("Admit at least one basis class with one grade to search.")
         return
-    r, errs = _search(text, "pressfit")
+    if not _search_button("Search fits", _token(text, "pressfit")):
+        return
+    r, errs = _search(text, "pressfit", tuple(sorted(admitted.items())))
     if r is None:
         for t in errs:
             st.error(widgets.error_text(InputError(*t)), icon=":material/error:")
@@ -558,15 +667,15 @@ def _fit_search_section(name: str, text: str) -> None:
     entry = state.joint("pressfit", name)
     hole, shaft, _ = _current_classes(entry)
     own = f"{hole}/{shaft}" if hole else None
-    st.subheader(f"{r.joint}: {len(r.passing)} of {r.evaluated} fits at "
+    st.subheader(f"{widgets.esc(r.joint)}: {len(r.passing)} of {r.evaluated} fits at "
                  f"Ø {unitsys.show(r.nominal_mm, 'length', system)} pass every check")
     if own:
         rank = next((c.rank for c in r.passing if f"{c.hole}/{c.shaft}" == own), None)
         rej = next((c for c in r.rejected if f"{c.hole}/{c.shaft}" == own), None)
         if rank:
-            st.caption(f"The joint's own fit {own} ranks #{rank} of {len(r.passing)}.")
+            st.caption(f"The joint's own fit {widgets.esc(own)} ranks #{rank} of {len(r.passing)}.")
         elif rej:
-            st.caption(f"The joint's own fit {own} fails: {_failing(rej)}.")
+            st.caption(f"The joint's own fit {widgets.esc(own)} fails: {widgets.esc(_failing(rej))}.")
     if r.passing:
         shrink = (entry or {}).get("assembly") == "shrink"
         rows = []
@@ -602,7 +711,7 @@ def _fit_search_section(name: str, text: str) -> None:
                      key=f"{PREFIX}.rejected", height=widgets.table_height(len(rows)),
                      column_config={"fails (margin)": st.column_config.TextColumn(width="large")})
     for n in r.notes:
-        st.caption(f"Note: {n}")
+        st.caption(f"Note: {widgets.esc(n)}")
 
 
 def _take_picker(name: str, r, own: str | None) -> None:
@@ -627,7 +736,7 @@ def _take_picker(name: str, r, own: str | None) -> None:
 def _failing(c) -> str:
     parts = []
     for n, m in c.failing:
-        parts.append(f"{n} ({m * 100:+.1f} %)" if math.isfinite(m) else n)
+        parts.append(f"{n} ({unitsys.margin_text(m)})" if math.isfinite(m) else n)
     return "; ".join(parts)
 
 
@@ -645,27 +754,34 @@ def _take_seat(name: str, seat: str, cls: str) -> None:
         return
     entry[seat] = cls
     st.session_state[joints.wkey("br", name, seat)] = cls
-    st.session_state[SEARCH_RUN] = state.doc_text(state.single_joint_doc("bearing", name))
-    st.session_state[TAKEN] = (f"Seat class **{cls}** is now the {seat} seat of *{name}* in the "
+    st.session_state[SEARCH_RUN] = _token(state.doc_text(state.single_joint_doc("bearing", name)),
+                                          "bearing")
+    st.session_state[TAKEN] = (f"Seat class **{widgets.esc(cls)}** is now the {seat} seat of *{widgets.esc(name)}* in the "
                                "case; the page *Bearing seats* shows it.")
 
 
 def _seat_search_section(name: str, text: str) -> None:
-    st.caption("Each shaft class (g … r, grades 5 and 6) with the housing as given, and each "
-               "housing class (G … P, grades 6 and 7) with the shaft as given, checked by the "
-               "bearing-seat engine. The lot study covers press fits.")
-    if not _search_button("Search seat classes", text):
+    st.caption("Each shaft class (the letters and grades admitted) with the housing as given, and "
+               "each housing class with the shaft as given, checked by the bearing-seat engine. "
+               "The lot study covers press fits.")
+    admitted = _admitted("bearing")  # seeds the widgets first
+    _admitted_widgets("bearing")
+    if not (admitted["shaft_letters"] and admitted["shaft_grades"]) and \
+            not (admitted["housing_letters"] and admitted["housing_grades"]):
+        st.info("Admit at least one letter with one grade to search.")
         return
-    r, errs = _search(text, "bearing")
+    if not _search_button("Search seat classes", _token(text, "bearing")):
+        return
+    r, errs = _search(text, "bearing", tuple(sorted(admitted.items())))
     if r is None:
         for t in errs:
             st.error(widgets.error_text(InputError(*t)), icon=":material/error:")
         return
-    st.subheader(f"{r.joint}: bearing {r.designation}, given shaft {r.shaft_given}, "
+    st.subheader(f"{widgets.esc(r.joint)}: bearing {widgets.esc(r.designation)}, given shaft {r.shaft_given}, "
                  f"housing {r.housing_given}")
     for seat, items, given in (("shaft", r.shafts, r.shaft_given),
                                ("housing", r.housings, r.housing_given)):
-        rows = [{"rank": c.rank if c.ok else "—", "class": c.cls,
+        rows = [{"rank": str(c.rank) if c.ok else "—", "class": c.cls,  # one type a column
                  "recommended": "★" if c.recommended else "",
                  "in the case": "●" if c.cls == given else "",
                  "operating clearance": _range(*c.operating_clearance_um, "um", state.system()),
@@ -688,7 +804,7 @@ def _seat_search_section(name: str, text: str) -> None:
                         disabled=chosen == given, on_click=_take_seat, args=(name, seat, chosen),
                         icon=":material/input:")
     for n in r.notes:
-        st.caption(f"Note: {n}")
+        st.caption(f"Note: {widgets.esc(n)}")
 
 
 if __name__ == "__main__":

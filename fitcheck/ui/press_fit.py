@@ -100,34 +100,50 @@ def render() -> None:
 
 
 def _summary(r: pressfit.PressFitResult, system: str, name: str) -> None:
-    widgets.verdict_banner(r.ok, checks.worst(r.checks),
-                           system)
-    st.subheader(f"{r.name or 'Joint'}: {r.fit or 'given interference'}, "
+    widgets.verdict_banner(r.ok, checks.worst(r.checks), system, checks=r.checks, table=TABLE,
+                           name=name)
+    if r.ok:
+        widgets.search_link(TABLE, name)
+    st.subheader(f"{widgets.esc(r.name or 'Joint')}: {widgets.esc(r.fit or 'given interference')}, "
                  f"Ø {unitsys.show(r.diameter, 'length', system)} × "
                  f"{unitsys.show(r.length, 'length', system)}")
+    gov = _governing(r, "torque_capacity", r.torque_capacity_min)
+    gov_p = _governing(r, "pressure", r.pressure_min)
     c = st.columns(3)
     c[0].metric("Torque capacity, loosest", unitsys.show(r.torque_capacity_min, "torque", system),
-                help="transmissible torque at the loosest fit in operation")
+                help=f"transmissible torque at the loosest fit, governing state: {gov}")
     c[1].metric("Torque required", unitsys.show(r.torque, "torque", system))
     c[2].metric("Slip safety, loosest", unitsys.num(r.slip_safety_min, 3),
                 help="capacity over the load (torque and thrust combined)")
     c = st.columns(3)
     c[0].metric("Pressure, loosest", unitsys.show(r.pressure_min, "stress", system),
-                help="contact pressure at the loosest fit in operation")
+                help=f"contact pressure at the loosest fit, governing state: {gov_p}")
     c[1].metric("Pressure, tightest", unitsys.show(r.pressure_max, "stress", system),
                 help="contact pressure at the tightest fit")
     c[2].metric("Hub yield safety", unitsys.num(r.hub_yield_safety, 3),
                 help="Rp0.2 over the largest von Mises stress at the hub bore, tightest fit")
     c = st.columns(3)
-    if r.assembly == "shrink":
-        c[0].metric("Hub heating temperature", unitsys.show_in(r.shrink_temperature_C, "degC",
-                                                                system))
-    else:
-        c[0].metric("Press-in force, largest", unitsys.show(r.press_force_max, "force", system))
-    c[1].metric("Shaft yield safety", unitsys.num(r.shaft_yield_safety, 3))
-    c[2].metric("Loosening speed", unitsys.show(r.loosening_speed, "speed", system, digits=3),
+    c[0].metric("Shaft yield safety", unitsys.num(r.shaft_yield_safety, 3))
+    c[1].metric("Loosening speed", unitsys.show(r.loosening_speed, "speed", system, digits=3),
                 help="speed at which the loosest fit loses all its pressure")
+    c = st.columns(3)
+    used = "used" if r.assembly == "press" else "for comparison"
+    c[0].metric("Press-in force, largest", unitsys.show(r.press_force_max, "force", system),
+                help=f"pressing on at the tightest fit, room temperature ({used})")
+    used = "used" if r.assembly == "shrink" else "for comparison"
+    c[1].metric("Hub heating temperature", unitsys.show_in(r.shrink_temperature_C, "degC", system),
+                help=f"shrinking on: hub temperature for the tightest fit plus the joining "
+                f"clearance ({used})")
     _capacity_chart(r, system, name)
+
+
+def _governing(r: pressfit.PressFitResult, attr: str, value: float) -> str:
+    """The name of the tolerance case (column of the cases table) a headline figure comes from."""
+    for case in (r.loosest_operating, r.loosest_assembly, r.tightest_operating,
+                 r.tightest_assembly):
+        if getattr(case, attr) == value:
+            return case.label
+    return "—"
 
 
 def _details(r: pressfit.PressFitResult, system: str, name: str) -> None:

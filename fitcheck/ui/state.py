@@ -103,11 +103,14 @@ def init() -> None:
     token = st.query_params.get(QP_CASE)
     if token:
         try:
-            ss[DOC] = read_toml_bytes(decode(token).encode("utf-8"), "address")
+            linked = read_toml_bytes(decode(token).encode("utf-8"), "address")
+            casefile.check_limits(linked)  # sizes, counts, control characters: refused whole
+            ss[DOC] = linked
             return
-        except InputError as exc:
+        except (InputError, InputErrors) as exc:
             ss[NOTICE] = f"The case in the address could not be read ({exc.message}); the demo is open."
     demo = demo_doc()
+    ss.setdefault("cf.source_text", casefile.demo_text())  # saving keeps the demo file's comments
     # the demo is written in SI: an address asking for inch units gets it in inch, like the switch
     ss[DOC] = demo if ss[UNITS] == "SI" else _convert(demo, ss[UNITS], ss.setdefault(MEMO, {}))
 
@@ -171,6 +174,11 @@ def switch_units() -> None:
     ss[UNITS] = new
     ss[DOC] = _convert(ss[DOC], new, memo)
     forget_widgets(DOC_PREFIXES)
+
+
+def convert(obj):
+    """A part of a document written in SI, rewritten in the session's unit system (as the switch)."""
+    return _convert(obj, system(), st.session_state.setdefault(MEMO, {}))
 
 
 def _convert(obj, system_name: str, memo: dict, key: str = ""):

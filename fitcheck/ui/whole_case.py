@@ -14,7 +14,7 @@ import streamlit as st
 
 from fitcheck import case as casefile
 from fitcheck.case import CaseCheck
-from fitcheck.ui import app, joints, state, widgets
+from fitcheck.ui import app, joints, state, unitsys, widgets
 
 PAGE_OF = {"pressfit": "press_fit", "bearing": "bearing_seat", "screws": "housing_screws"}
 
@@ -44,14 +44,15 @@ def render() -> None:
                     key=lambda c: (c.margin, c.label, c.check.name))
     n_joints = len(results) + len(problems)
     if n_joints == 0:
-        st.info("The open case has no joints. Open a case file on the page *Case file and report*.")
+        st.info("The open case has no joints. Add them on the pages *Press fit*, *Bearing seats* "
+                "and *Housing screws*, or open a case file on the page *Case file and report*.")
         return
     failed = [c for c in checks if not c.passed]
     ok = bool(checks) and not failed and not problems
     worst = checks[0] if checks else None
     if problems and not failed:
         st.error(f"{len(problems)} joint(s) cannot be checked until their inputs are corrected: "
-                 + ", ".join(problems) + ". Of the others, every check holds.",
+                 + ", ".join(widgets.esc(p) for p in problems) + ". Of the others, every check holds.",
                  icon=":material/cancel:")
     else:
         widgets.verdict_banner(ok, worst, system)
@@ -65,7 +66,7 @@ def render() -> None:
         st.subheader("Joints that cannot be checked")
         for label, errs in problems.items():
             with st.container(border=True):
-                st.markdown(f"**{label}** — correct these inputs on its page:")
+                st.markdown(f"**{widgets.esc(label)}** — correct these inputs on its page:")
                 for e in errs:
                     st.error(widgets.error_text(e), icon=":material/error:")
 
@@ -78,7 +79,7 @@ def render() -> None:
             "kind": casefile.ENGINES[j.table].label,
             "verdict": widgets.PASS if j.ok else widgets.FAIL,
             "weakest check": w.name if w else "—",
-            "margin": "—" if w is None or not math.isfinite(w.margin) else f"{w.margin * 100:+.1f} %",
+            "margin": "—" if w is None else unitsys.margin_text(w.margin),
             "checks failing": sum(not c.passed for c in j.checks),
         })
     st.dataframe(widgets.styled(pd.DataFrame(rows)), hide_index=True, width="stretch",

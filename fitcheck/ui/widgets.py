@@ -2,7 +2,6 @@
 
 from __future__ import annotations
 
-import math
 import re
 from collections.abc import Iterable, Mapping, Sequence
 
@@ -15,6 +14,20 @@ from fitcheck.ui import state, unitsys
 
 PASS, FAIL = "✔ holds", "✘ FAILS"
 SENSE = {">=": "≥", "<=": "≤"}
+_MD = re.compile(r"([\\`*_{}\[\]()<>#+\-.!|~$:=\"'&])")
+
+
+def esc(text) -> str:
+    r"""User text shown literally inside Markdown (``st.markdown``, ``st.error``, labels …).
+
+    Every Markdown, HTML and Streamlit-directive character is escaped with a backslash, so a
+    joint name such as ``![x](http://…)`` or ``:red[x]`` shows as typed and adds no image,
+    link or colour; line breaks become spaces.
+
+    >>> esc("![x](http://a.b/c.png)")
+    '\\!\\[x\\]\\(http\\://a\\.b/c\\.png\\)'
+    """
+    return _MD.sub(r"\\\1", " ".join(str(text).split()))
 
 
 def table_height(n_rows: int) -> int:
@@ -164,9 +177,13 @@ def choice_field(label: str, wkey: str, options: Sequence[str], help: str | None
 
 
 def error_text(e: InputError) -> str:
-    text = f"**{e.field}**: got `{e.value!r}` — allowed: {e.allowed}"
+    """The library's message for one input, as Markdown (user text escaped)."""
+    text = f"**{esc(e.field)}**: "
+    if e.value is not None and e.value != "":
+        text += f"got {esc(repr(e.value))} — "
+    text += f"allowed: {esc(e.allowed)}"
     if e.hint:
-        text += f" ({e.hint})"
+        text += f" ({esc(e.hint)})"
     return text
 
 
@@ -213,11 +230,11 @@ def checks_table(checks: Iterable, system: str, joint_of=None) -> pd.DataFrame:
             "check": chk.name,
             "value": unitsys.show_in(chk.value, chk.unit, system),
             "must be": f"{SENSE[chk.sense]} {unitsys.show_in(chk.limit, chk.unit, system)}",
-            "margin": "—" if not math.isfinite(m) else f"{m * 100:+.1f} %",
+            "margin": unitsys.margin_text(m),
             "reference": chk.reference,
         })
         if chk.note:
-            row["note"] = chk.note
+            row["note"] = unitsys.words(chk.note)
         rows.append(row)
     return pd.DataFrame(rows)
 
@@ -227,35 +244,80 @@ def show_checks(checks: Sequence, system: str, key: str) -> None:
     if df.empty:
         st.info("No checks for this joint.")
         return
-    st.dataframe(styled(df), hide_index=True, width="stretch", key=key,
-                 height=table_height(len(df)),
-                 column_config={"reference": st.column_config.TextColumn(width="large")})
+    static_table(df, key=key)
 
 
-def verdict_banner(ok: bool, worst=None, system: str = "SI") -> None:
-    """One line saying whether every check holds, naming the weakest one."""
+def static_table(df: pd.DataFrame, key: str | None = None) -> None:
+    """A table that fits the page width and wraps its text columns (no inner scrolling)."""
+    del key  # static tables keep no state
+    st.table(styled(df).hide(axis="index") if "verdict" in df.columns and not df.empty
+             else df.style.hide(axis="index"))
+
+
+def verdict_banner(ok: bool, worst=None, system: str = "SI", *, checks: Sequence = (),
+                   table: str | None = None, name: str | None = None) -> None:
+    """Whether every check holds; when not, every failing check with its cause and next step.
+
+    ``checks`` (with ``table`` and ``name`` of the joint) lists the failing ones with the
+    library's words (:func:`fitcheck.advice.explain`) and a link that opens the fit search (or
+    the seat search) with this joint selected. Without ``checks`` one line names ``worst``.
+    """
+    from fitcheck import advice
+
+    failing = [c for c in checks if not getattr(c, "check", c).passed]
+    if failing and table is not None:
+        lines = []
+        for c in failing:
+            chk = getattr(c, "check", c)
+            a = advice.explain(table, chk)
+            lines.append(f"- **{esc(chk.name)}**: {_against(chk, system)} — {esc(a.cause)} — "
+                         f"*{esc(a.next_step)}*")
+        head = ("Does not hold: 1 check fails" if len(failing) == 1 else
+                f"Does not hold: {len(failing)} checks fail")
+        st.error(head + "\n\n" + "\n".join(lines), icon=":material/cancel:")
+        actions = {advice.explain(table, getattr(c, "check", c)).action for c in failing}
+        if name is not None and (advice.FIT_SEARCH in actions or advice.SEAT_SEARCH in actions):
+            search_link(table, name, primary=True)
+        return
     if worst is None:
         (st.success if ok else st.error)("All checks hold." if ok else "A check fails.")
         return
     chk = getattr(worst, "check", worst)
-    where = f"{worst.label}: " if hasattr(worst, "label") else ""
-    m = chk.margin
-    mtxt = "" if not math.isfinite(m) else f" (margin {m * 100:+.1f} %)"
+    where = f"{esc(worst.label)}: " if hasattr(worst, "label") else ""
+    mtxt = f" (margin {unitsys.margin_text(chk.margin)})"
     if ok:
-        st.success(f"Every check holds. Smallest margin: {where}{chk.name}{mtxt}.", icon=":material/check_circle:")
+        st.success(f"Every check holds. Smallest margin: {where}{esc(chk.name)}{mtxt}.",
+                   icon=":material/check_circle:")
     else:
-        st.error(f"Does not hold: {where}{chk.name} — "
-                 f"{unitsys.show_in(chk.value, chk.unit, system)} against "
-                 f"{SENSE[chk.sense]} {unitsys.show_in(chk.limit, chk.unit, system)}{mtxt}.", icon=":material/cancel:")
+        st.error(f"Does not hold: {where}{esc(chk.name)} — {_against(chk, system)}.",
+                 icon=":material/cancel:")
+
+
+def _against(chk, system: str) -> str:
+    return (f"{unitsys.show_in(chk.value, chk.unit, system)} against "
+            f"{SENSE[chk.sense]} {unitsys.show_in(chk.limit, chk.unit, system)} "
+            f"(margin {unitsys.margin_text(chk.margin)})")
+
+
+SEARCH_PAGE = "fitcheck/ui/lot_study.py"
+QP_SEARCH = "search"   # address parameter: the joint the fit search opens with, "table:name"
+
+
+def search_link(table: str, name: str, primary: bool = False) -> None:
+    """A link to the fit search (press fits) or the seat search (bearings) with this joint chosen."""
+    label = "Search fits for this joint" if table == "pressfit" else \
+        "Search seat classes for this joint"
+    st.page_link(SEARCH_PAGE, label=label, icon=":material/search:",
+                 query_params={QP_SEARCH: f"{table}:{name}"},
+                 help="Opens the search with this joint selected and runs it.")
 
 
 def warnings_box(messages: Iterable[str]) -> None:
     msgs = list(messages)
     if msgs:
-        st.warning("Outside a method's range of validity:\n\n" + "\n".join(f"- {m}" for m in msgs))
+        st.warning("Outside a method's range of validity:\n\n" + "\n".join(f"- {esc(m)}" for m in msgs))
 
 
 def kv_table(rows: Mapping[str, str] | Sequence[tuple[str, str]], key: str | None = None) -> None:
     items = list(rows.items()) if isinstance(rows, Mapping) else list(rows)
-    st.dataframe(pd.DataFrame(items, columns=["quantity", "value"]), hide_index=True,
-                 width="stretch", key=key, height=table_height(len(items)))
+    static_table(pd.DataFrame(items, columns=["quantity", "value"]), key=key)

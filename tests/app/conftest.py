@@ -131,7 +131,7 @@ def page(browser, server):
     """A fresh browser context and page (tall viewport: Streamlit scrolls in its own container)."""
     ctx = browser.new_context(viewport={"width": 1400, "height": 2400}, accept_downloads=True)
     pg = ctx.new_page()
-    pg.set_default_timeout(30_000)
+    pg.set_default_timeout(int(30_000 * float(os.environ.get("FITCHECK_BROWSER_SLOW", "1"))))
     try:
         yield pg
     finally:

@@ -7,12 +7,13 @@ import pytest
 from fitcheck import fits
 from fitcheck.errors import InputError
 from fitcheck.ui import unitsys
+from fitcheck.ui.widgets import esc
 
 PAGE = "fit_limits"
 
 
 def _limits(at):
-    return next(d.value for d in at.dataframe if "limit" in d.value.columns)
+    return next(d.value for d in [*at.dataframe, *at.table] if "limit" in d.value.columns)
 
 
 def _metrics(at):
@@ -31,7 +32,7 @@ def test_opens_on_default_fit_with_library_limits(app_test):
     m = _metrics(at)
     assert m["Smallest interference"] == unitsys.show(f.interference_min_um, "small_length", "SI")
     assert m["Largest interference"] == unitsys.show(f.interference_max_um, "small_length", "SI")
-    assert len(at.get("image")) >= 1  # the zone diagram
+    assert len(at.get("vega_lite_chart")) == 1  # the zone diagram
     assert any("verify every result by test" in w.value for w in at.warning)
 
 
@@ -87,13 +88,41 @@ def test_bad_designation_shows_the_library_message(app_test, text, field):
     assert not at.exception
     with pytest.raises(InputError) as exc:
         fits.parse(text)
-    assert any(f"**{field}**" in e.value and exc.value.allowed in e.value for e in at.error)
-    # the last valid fit stays on screen
-    assert at.subheader[-1].value.startswith("25 H7/p6")
+    assert any(f"**{esc(field)}**" in e.value and esc(exc.value.allowed) in e.value for e in at.error)
+    # the results of the last valid fit are cleared
+    assert not at.metric and not at.get("vega_lite_chart")
+    assert any("Correct the designation" in i.value for i in at.info)
 
 
-def test_bad_size_shows_the_message_by_the_field(app_test):
+def test_a_negative_size_says_the_size_must_be_positive_and_abc_names_no_other_value(app_test):
     at = app_test(PAGE)
-    at.text_input(key="fl.size").set_value("-3 mm").run()
+    at.text_input(key="fl.text").set_value("-5 mm H7/p6").run()
     assert not at.exception
-    assert any("**nominal size**" in e.value for e in at.error)
+    msgs = [e.value for e in at.error]
+    assert any(esc("a length > 0 mm") in m and "nominal size" in m for m in msgs), msgs
+    assert not at.metric
+    at.text_input(key="fl.text").set_value("abc").run()
+    msgs = [e.value for e in at.error]
+    assert msgs and all("0 mm" not in m for m in msgs), msgs
+    assert not at.metric
+
+
+def _chart_frame(el):
+    import pyarrow as pa
+
+    return pa.ipc.open_stream(el.proto.data.data).read_pandas()
+
+
+def test_the_zone_diagram_is_a_browser_chart_of_the_library_limits(app_test):
+    at = app_test(PAGE)
+    f = fits.fit("25 mm", "H7", "p6")
+    (chart,) = at.get("vega_lite_chart")
+    df = _chart_frame(chart)
+    assert list(df["zone"]) == ["hole H7", "shaft p6"]
+    assert list(df["upper"]) == pytest.approx([f.hole.upper_um, f.shaft.upper_um])
+    assert list(df["lower"]) == pytest.approx([f.hole.lower_um, f.shaft.lower_um])
+    assert not at.get("image")  # one chart style: no matplotlib picture
+    # inch units: the axis reads in thousandths of an inch (1 µm = 0.03937 thousandths)
+    at = app_test(PAGE, query={"u": "inch"})
+    df = _chart_frame(at.get("vega_lite_chart")[0])
+    assert list(df["upper"]) == pytest.approx([f.hole.upper_um / 25.4, f.shaft.upper_um / 25.4])

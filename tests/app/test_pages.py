@@ -15,6 +15,7 @@ import fitcheck
 from fitcheck import case as casefile
 from fitcheck import tomlwrite
 from fitcheck.ui import app, state, unitsys
+from fitcheck.ui.widgets import esc
 
 PAGES = [p.module for p in app.PAGES]
 
@@ -69,7 +70,7 @@ def test_press_fit_shows_the_library_results(app_test):
     assert m["Torque required"] == unitsys.show(r.torque, "torque", "SI")
     assert m["Pressure, tightest"] == unitsys.show(r.pressure_max, "stress", "SI")
     assert m["Slip safety, loosest"] == unitsys.num(r.slip_safety_min, 3)
-    checks = next(d.value for d in at.dataframe if "check" in d.value.columns)
+    checks = next(d.value for d in [*at.dataframe, *at.table] if "check" in d.value.columns)
     assert list(checks["check"]) == [c.name for c in r.checks]
     capacity, wall = (chart_data(c) for c in at.get("vega_lite_chart"))
     band = r.capacity_band()
@@ -130,7 +131,7 @@ def test_press_fit_bad_input_shows_its_field(app_test, key, bad):
         casefile.loads(tomlwrite.dumps(doc))
     errs = exc.value.errors if isinstance(exc.value, fitcheck.InputErrors) else [exc.value]
     e = next(e for e in errs if key in e.field)
-    assert any(f"**{e.field}**" in t and e.allowed in t for t in errors(at))
+    assert any(f"**{esc(e.field)}**" in t and esc(e.allowed) in t for t in errors(at))
     assert not at.metric  # no stale results beside a bad input
 
 
@@ -171,7 +172,7 @@ def test_bearing_bad_designation_shows_its_field(app_test):
     doc["bearing"][0]["designation"] = "6299X"
     at = app_test("bearing_seat", query={"case": state.encode(tomlwrite.dumps(doc))})
     assert not at.exception
-    assert any("**bearing[A-side-6202].designation**" in t for t in errors(at))
+    assert any(f"**{esc('bearing[A-side-6202].designation')}**" in t for t in errors(at))
 
 
 # --------------------------------------------------------------------------- housing screws
@@ -203,7 +204,7 @@ def test_screw_change_and_bad_thread(app_test):
     assert metrics(at)["Preload needed F_M,min"] == unitsys.show(r.F_M_min, "force", "SI")
     at.text_input(key=f"sc.{SC}.thread").set_value("M5x9").run()
     assert not at.exception
-    assert any(f"**screws[{SC}].thread**" in t for t in errors(at))
+    assert any(f"**{esc(f'screws[{SC}].thread')}**" in t for t in errors(at))
 
 
 def test_screw_layer_edit_flows_to_the_document(app_test):
@@ -227,7 +228,7 @@ def test_case_verdict_lists_every_check_worst_first(app_test):
     assert m["Joints"] == str(len(res.joints))
     assert m["Checks"] == str(len(res.checks))
     assert m["Failing checks"] == str(sum(not c.passed for c in res.checks))
-    table = next(d.value for d in at.dataframe if "joint" in d.value.columns
+    table = next(d.value for d in [*at.dataframe, *at.table] if "joint" in d.value.columns
                  and "check" in d.value.columns)
     ordered = res.by_margin()
     assert list(table["check"]) == [c.check.name for c in ordered]
@@ -242,7 +243,7 @@ def test_case_verdict_keeps_other_joints_when_one_is_bad(app_test):
     m = metrics(at)
     assert m["Joints with input problems"] == "1"
     assert m["Joints"] == "4"
-    assert any(f"pressfit[{PF}].length" in t for t in errors(at))
+    assert any(esc(f"pressfit[{PF}].length") in t for t in errors(at))
 
 
 # --------------------------------------------------------------------------- state and units
@@ -305,7 +306,7 @@ def test_case_upload_replaces_the_case(app_test):
     at.file_uploader[0].upload("mine.toml", tomlwrite.dumps(doc).encode(), "application/toml")
     at.run()
     assert not at.exception
-    assert any("Opened mine.toml" in s.value for s in at.success)
+    assert any(esc("Opened mine.toml") in s.value for s in at.success)
     assert at.text_input(key="title.project").value == "Bench pump test"
     at.switch_page("fitcheck/ui/press_fit.py").run()
     assert at.text_input(key=f"pf.{PF}.torque").value == "2 N*m"
@@ -322,7 +323,7 @@ def test_bad_upload_is_refused_with_its_problems(app_test):
     assert at.text_input(key="title.project").value == demo_doc()["title"]["project"]
     at.file_uploader[0].set_value(("junk.toml", b"\x00\x01binary", "application/toml")).run()
     assert not at.exception
-    assert any("junk.toml" in t for t in errors(at))
+    assert any(esc("junk.toml") in t for t in errors(at))
 
 
 def test_download_and_report(app_test):

@@ -1,0 +1,179 @@
+"""Own cases and verdicts at a glance (AppTest): the wiring of issue 15.
+
+Joints are added, duplicated, renamed and deleted on their pages; a failing joint's banner
+lists every failing check with the library's cause and next step and links to the fit search;
+the numbers shown equal a direct library call and follow the number format
+(3–4 significant digits, no e-notation, no "-0", units as people write them).
+"""
+
+from __future__ import annotations
+
+import re
+import tomllib
+
+import pytest
+
+from fitcheck import advice, tomlwrite
+from fitcheck import case as casefile
+from fitcheck.search import search_fits
+from fitcheck.ui import state, unitsys
+from fitcheck.ui.widgets import esc
+
+PF = "gear-on-shaft"
+#: a displayed number: no e-notation, no "-0", no unit spelt as pint writes it
+BAD_NUMBER = re.compile(r"\de[+-]?\d|(?<![\d.])-0(?![.\d])|\bum\b|degC|N\*m|lbf\*in|\+inf|∞")
+
+
+def demo_doc() -> dict:
+    return tomllib.loads(casefile.demo_text())
+
+
+def addr(doc: dict) -> dict:
+    return {"case": state.encode(tomlwrite.dumps(doc))}
+
+
+def result_of(doc: dict, table: str, name: str):
+    res = casefile.evaluate(casefile.loads(tomlwrite.dumps(doc)))
+    return next(j.result for j in res.joints if j.table == table and j.name == name)
+
+
+def metrics(at) -> dict:
+    return {m.label: m.value for m in at.metric}
+
+
+def failing_doc() -> dict:
+    doc = demo_doc()
+    pf = doc["pressfit"][0]
+    for k in ("interference_min", "interference_max"):
+        pf.pop(k, None)
+    pf["fit"] = "12 mm H7/g6"  # ISO 286: a clearance fit, no contact pressure
+    return doc
+
+
+# --------------------------------------------------------------------------- own cases
+
+def test_new_empty_case_then_add_a_joint_of_each_kind(app_test):
+    at = app_test("case_file")
+    at.button(key="cf.new").click().run()
+    assert not at.exception
+    assert state.doc_text(at.session_state[state.DOC]).strip().startswith("format_version")
+    at.text_input(key="title.project").set_value("Gear hub trial").run()
+    for page, prefix in (("press_fit", "pf"), ("bearing_seat", "br"),
+                         ("housing_screws", "sc")):
+        at.switch_page(f"fitcheck/ui/{page}.py").run()
+        assert not at.metric  # nothing to show yet
+        at.button(key=f"{prefix}.add").click().run()
+        assert not at.exception
+        assert at.metric  # the new joint is evaluated
+    doc = at.session_state[state.DOC]
+    assert doc["title"]["project"] == "Gear hub trial"
+    assert [e["name"] for e in doc["pressfit"]] == ["press-fit"]
+    assert [e["name"] for e in doc["bearing"]] == ["bearing"]
+    assert [e["name"] for e in doc["screws"]] == ["screws"]
+    casefile.loads(tomlwrite.dumps(doc))  # a valid case file
+    assert "case" in at.query_params  # the case is in the address
+
+
+def test_rename_keeps_the_inputs_and_delete_removes_the_joint(app_test):
+    at = app_test("press_fit")
+    at.text_input(key=f"pf.{PF}.torque").set_value("3.1 N*m").run()
+    at.text_input(key="pf.rename").set_value("hub two").run()
+    at.button(key="pf.rename.button").click().run()
+    assert not at.exception
+    assert at.selectbox(key="pf.joint").value == "hub two"
+    assert at.text_input(key="pf.hub two.torque").value == "3.1 N*m"
+    doc = at.session_state[state.DOC]
+    assert [e["name"] for e in doc["pressfit"]] == ["hub two"]
+    assert doc["pressfit"][0]["torque"] == "3.1 N*m"
+    assert metrics(at)["Torque required"] == "3.1 N·m"
+    at.button(key="pf.duplicate").click().run()
+    assert at.selectbox(key="pf.joint").value == "hub two-copy"
+    assert at.text_input(key="pf.hub two-copy.torque").value == "3.1 N*m"
+    at.button(key="pf.delete").click().run()
+    assert not at.exception
+    assert [e["name"] for e in at.session_state[state.DOC]["pressfit"]] == ["hub two"]
+    at.text_input(key="pf.rename").set_value("hub two").run()  # the name field is the current one
+    at.button(key="pf.duplicate").click().run()
+    at.text_input(key="pf.rename").set_value("hub two").run()
+    at.button(key="pf.rename.button").click().run()  # a name already used is refused
+    assert any("Another joint is named" in e.value for e in at.error)
+
+
+# --------------------------------------------------------------------------- verdicts
+
+def test_failing_banner_lists_every_failing_check_with_cause_and_link(app_test):
+    doc = failing_doc()
+    at = app_test("press_fit", query=addr(doc))
+    assert not at.exception
+    r = result_of(doc, "pressfit", PF)
+    failing = [c for c in r.checks if not c.passed]
+    assert failing
+    banner = at.error[0].value
+    for a in advice.failing("pressfit", r.checks):
+        assert esc(a.check) in banner and esc(a.cause) in banner and esc(a.next_step) in banner
+    assert esc("no contact pressure at the loosest fit: the joint slips") in banner
+    links = at.get("page_link")
+    assert any("lot" in link.proto.page and "search=pressfit" in
+               link.proto.query_string.replace("%3A", ":") for link in links), \
+        [(link.proto.page, link.proto.query_string) for link in links]
+
+
+def test_the_fit_search_opens_with_the_linked_joint_and_runs(app_test):
+    at = app_test("lot_study", query={"search": f"pressfit:{PF}"})
+    assert not at.exception
+    assert at.selectbox(key="ls.joint").value == f"press fit: {PF}"
+    r = search_fits(casefile.loads(tomlwrite.dumps(demo_doc())).pressfits[0])
+    assert any(f"{len(r.passing)} of {r.evaluated} fits" in s.value for s in at.subheader)
+    assert "search" not in at.query_params
+
+
+def test_the_admitted_fit_set_changes_the_search(app_test):
+    at = app_test("lot_study", query={"search": f"pressfit:{PF}"})
+    at.get("button_group")  # the systems pills
+    at.multiselect(key="ls.admit.pressfit.holes").set_value(["H7"]).run()
+    at.multiselect(key="ls.admit.pressfit.shafts").set_value([]).run()
+    at.button(key="ls.run_search").click().run()
+    assert not at.exception
+    inp = casefile.loads(tomlwrite.dumps(demo_doc())).pressfits[0]
+    r = search_fits(inp, holes=("H7",), shafts=())
+    assert any(f"{len(r.passing)} of {r.evaluated} fits" in s.value for s in at.subheader)
+
+
+def test_press_fit_headline_equals_the_library_and_the_table(app_test):
+    at = app_test("press_fit")
+    r = result_of(demo_doc(), "pressfit", PF)
+    m = metrics(at)
+    assert m["Press-in force, largest"] == unitsys.show(r.press_force_max, "force", "SI")
+    assert m["Hub heating temperature"] == unitsys.show_in(r.shrink_temperature_C, "degC", "SI")
+    cases = next(d.value for d in at.dataframe if "loosest, operating" in d.value.columns)
+    # the headline is the governing (loosest) state's and equals that column of the table
+    column = "loosest, operating" if r.loosest_operating.torque_capacity == \
+        r.torque_capacity_min else "loosest, assembly"
+    row = dict(zip(cases["quantity"], cases[column], strict=True))
+    assert m["Torque capacity, loosest"] == row["torque capacity"]
+    assert m["Pressure, loosest"] == row["contact pressure"]
+    helps = {x.label: x.proto.help for x in at.metric}
+    gov = r.loosest_operating if column == "loosest, operating" else r.loosest_assembly
+    assert helps["Torque capacity, loosest"].endswith(gov.label)
+
+
+@pytest.mark.parametrize("page", ["press_fit", "bearing_seat", "housing_screws", "fit_limits"])
+@pytest.mark.parametrize("system", ["SI", "inch"])
+def test_every_number_follows_the_format(app_test, page, system):
+    at = app_test(page, query={"u": system} if system == "inch" else None)
+    assert not at.exception
+    shown = [m.value for m in at.metric] + [m.label for m in at.metric]
+    for t in [*at.dataframe, *at.table]:
+        shown += [str(v) for v in t.value.to_numpy().ravel()]
+    bad = [s for s in shown if BAD_NUMBER.search(s)]
+    assert not bad, bad
+
+
+def test_a_joint_name_is_shown_literally(app_test):
+    doc = demo_doc()
+    doc["screws"][0]["name"] = "![x](http://example.invalid/x.png) :red[y]"
+    at = app_test("housing_screws", query=addr(doc))
+    assert not at.exception
+    texts = [e.value for e in [*at.subheader, *at.markdown, *at.error, *at.success, *at.caption]]
+    assert any(esc("![x](http://example.invalid/x.png) :red[y]") in t for t in texts)
+    assert not any("](http://example.invalid" in t and "\\]" not in t for t in texts)
