@@ -41,6 +41,7 @@ from dataclasses import dataclass, field, fields
 import numpy as np
 
 from . import materials, tables
+from . import shaft as _shaft
 from .checks import Check, all_passed
 from .core import bearing as core
 from .core import clearance_stats as stats
@@ -120,6 +121,7 @@ KEYS: dict[str, str] = {
     "clearance_distribution": "how each tolerance band is spread in the probable clearance: 'normal' "
                               "(±3σ = band, default) or 'uniform'",
 }
+KEYS.update(_shaft.BEARING_KEYS)  # the shaft at the ring edge (DIN 743), fitcheck.shaft
 
 #: The method step by step, with the clause it follows (printed in reports).
 METHOD_NOTES: list[tuple[str, str]] = [
@@ -155,6 +157,7 @@ METHOD_NOTES: list[tuple[str, str]] = [
     ("Axial force held by friction where no shoulder or retaining ring is declared, mu*p*pi*d*B, "
      "mu per seat from data/pressfit_friction.csv (oiled longitudinal press fit)", "DIN 7190-1:2017, 7"),
 ]
+METHOD_NOTES.extend(_shaft.METHOD_NOTES)
 
 
 # --------------------------------------------------------------------------- tables
@@ -510,6 +513,7 @@ def _material_mapping(m: Material):
     for k in ("pG", "tauB"):
         if math.isfinite(getattr(m, k)):
             out[k] = f"{getattr(m, k)!r} MPa"
+    out.update(materials.fatigue_mapping(m))
     return out
 
 
@@ -560,6 +564,7 @@ class BearingSeatInput:
     temperature_min: float | None = None
     temperature_max: float | None = None
     clearance_distribution: str = "normal"
+    shaft_loads: _shaft.ShaftLoads = _shaft.ShaftLoads()  # shaft at the ring edge (DIN 743)
 
     @classmethod
     def from_mapping(cls, mapping: Mapping, field: str = "bearing") -> BearingSeatInput:
@@ -631,6 +636,7 @@ class BearingSeatInput:
                     size = b.d if key == "shaft" else b.D
                     with errs.field(field):
                         _zone(size, vals[key], key)
+        vals["shaft_loads"] = _shaft.ShaftLoads.from_mapping(m, field, errs, _shaft.BEARING_KEYS)
         errs.raise_if_any()
         return cls(**vals)
 
@@ -640,6 +646,9 @@ class BearingSeatInput:
         for f in fields(self):
             v = getattr(self, f.name)
             if v is None or (f.name == "name" and v == ""):
+                continue
+            if isinstance(v, _shaft.ShaftLoads):
+                out.update(v.to_mapping())
                 continue
             if isinstance(v, Material):
                 out[f.name] = _material_mapping(v)
@@ -783,6 +792,7 @@ class BearingSeatResult:
     temperature_min_C: float | None = None
     temperature_max_C: float | None = None
     headline: str = ""
+    shaft: _shaft.ShaftSeatResult | None = None  # the shaft at the ring edge (DIN 743)
 
     @property
     def ok(self) -> bool:
@@ -790,10 +800,11 @@ class BearingSeatResult:
         return all_passed(self.checks)
 
     def to_dict(self) -> dict:
-        d = {f.name: getattr(self, f.name) for f in fields(self) if f.name != "checks"}
+        d = {f.name: getattr(self, f.name) for f in fields(self) if f.name not in ("checks", "shaft")}
         d["clearance_states"] = [dict(x) for x in self.clearance_states]
         d = {k: list(v) if isinstance(v, tuple) else v for k, v in d.items()}
         d["checks"] = [c.to_dict() for c in self.checks]
+        d.update(_shaft.json_fields(self.shaft))
         d["ok"] = self.ok
         return d
 
@@ -1045,6 +1056,13 @@ def evaluate(inp: BearingSeatInput) -> BearingSeatResult:
                                 f"no shoulder or retaining ring declared; mu = {mu:g}"))
     if rec is not None and "auto" in (inp.shaft, inp.housing):
         notes.extend(rec.notes)
+    shaft = _shaft.evaluate_seat(d=b.d, di=inp.shaft_bore, material=m_s, rz_um=inp.rz_shaft,
+                                 loads=inp.shaft_loads, torque=inp.shaft_loads.torque or 0.0,
+                                 axial_force=inp.axial_force, temperature=tsh, what="bearing inner ring")
+    checks.extend(shaft.checks)
+    notes.extend(shaft.notes)
+    for msg in shaft.warnings:
+        warnings.warn(f"{b.designation}: {msg}", MethodRangeWarning, stacklevel=2)
 
     return BearingSeatResult(
         name=inp.name, designation=b.designation, series=b.series, kind=b.kind,
@@ -1078,7 +1096,7 @@ def evaluate(inp: BearingSeatInput) -> BearingSeatResult:
         friction_inner=float(mu_i), friction_outer=float(mu_o),
         temperature_assembly_C=ta, temperature_inner_C=ti, temperature_outer_C=to,
         temperature_shaft_C=tsh, temperature_housing_C=th,
-        notes=tuple(dict.fromkeys(notes)), checks=tuple(checks),
+        notes=tuple(dict.fromkeys(notes)), checks=tuple(checks), shaft=shaft,
         clearance_state=gov["state"] if gov else "", clearance_mean_um=gov["mean"] if gov else math.nan,
         clearance_probable_min_um=gov["probable_min"] if gov else math.nan,
         clearance_sigma_um=gov["sigma"] if gov else math.nan,

@@ -49,6 +49,16 @@ class Material:
         Shear strength, for thread stripping [MPa]; NaN if not given.
     source : str
     note : str
+    sigma_zdW, sigma_bW, tau_tW : float
+        Fatigue strengths (tension-compression, rotating bending, torsion) at the reference
+        diameter ``dB`` of DIN 743-3:2012 [MPa]; NaN where not given (steels then use the
+        standard's ratios to Rm, other materials are outside DIN 743).
+    dB : float
+        Reference diameter of Rp02, Rm and the fatigue strengths for DIN 743 [mm]; NaN if not given.
+    din743_group : str
+        Technological size group of DIN 743-2 (``QT``, ``case``, ``structural``); "" if none.
+    fatigue_source : str
+        Where the fatigue strengths come from.
     """
 
     name: str
@@ -64,6 +74,12 @@ class Material:
     tauB: float = math.nan
     source: str = "user input"
     note: str = ""
+    sigma_zdW: float = math.nan
+    sigma_bW: float = math.nan
+    tau_tW: float = math.nan
+    dB: float = math.nan
+    din743_group: str = ""
+    fatigue_source: str = ""
 
     @property
     def is_ductile(self) -> bool:
@@ -84,8 +100,29 @@ def _table() -> dict[str, Material]:
             alpha=_f(r, "alpha_1e-6_per_K") * 1e-6, Rp02=_f(r, "Rp02_MPa"), Rm=_f(r, "Rm_MPa"),
             density=_f(r, "density_kg_m3") * 1e-12, max_heating_C=_f(r, "max_heating_C"),
             pG=_f(r, "pG_MPa"), tauB=_f(r, "tauB_MPa"), source=r["source"], note=r.get("note", ""),
+            sigma_zdW=_f(r, "sigma_zdW_MPa"), sigma_bW=_f(r, "sigma_bW_MPa"), tau_tW=_f(r, "tau_tW_MPa"),
+            dB=_f(r, "dB_mm"), din743_group=r.get("din743_group", "") or "",
+            fatigue_source=r.get("fatigue_source", "") or "",
         )
         out[m.name.lower()] = m
+    return out
+
+
+def fatigue_mapping(m: Material) -> dict:
+    """The DIN 743 fields of a material that are set, as inline keys (for lossless round trips).
+
+    >>> fatigue_mapping(get("C45E"))["sigma_bW"]
+    '350.0 MPa'
+    """
+    out: dict = {}
+    for k in ("sigma_zdW", "sigma_bW", "tau_tW"):
+        if not math.isnan(getattr(m, k)):
+            out[k] = f"{getattr(m, k)!r} MPa"
+    if not math.isnan(m.dB):
+        out["dB"] = f"{m.dB!r} mm"
+    for k in ("din743_group", "fatigue_source"):
+        if getattr(m, k):
+            out[k] = getattr(m, k)
     return out
 
 
@@ -116,6 +153,8 @@ _INLINE_KEYS = {
     "name": None, "group": None, "E": "stress", "nu": "nu", "alpha": "expansion", "Rp02": "stress",
     "Rm": "stress", "density": "density", "max_heating": "temp", "pG": "stress", "tauB": "stress",
     "source": None, "note": None,
+    "sigma_zdW": "stress", "sigma_bW": "stress", "tau_tW": "stress", "dB": "length",
+    "din743_group": None, "fatigue_source": None,
 }
 
 
@@ -146,6 +185,10 @@ def from_mapping(d: Mapping, field: str = "material") -> Material:
     if base is not None:
         vals["name"] = d.get("name", f"{base.name} (modified)")
         vals["source"] = d.get("source", f"{base.source}; modified by user")
+        if ("Rm" in d or "Rp02" in d) and not any(k in d for k in ("sigma_zdW", "sigma_bW", "tau_tW")):
+            # tabulated fatigue strengths belong to the tabulated Rm: fall back to DIN 743-3 ratios
+            vals.update(sigma_zdW=math.nan, sigma_bW=math.nan, tau_tW=math.nan,
+                        fatigue_source="DIN 743-3:2012 ratios to Rm (base strength changed)")
     for key, v in d.items():
         if key == "base":
             continue

@@ -34,6 +34,7 @@ from dataclasses import dataclass, fields
 import numpy as np
 
 from . import materials as _materials
+from . import shaft as _shaft
 from . import tables
 from .checks import Check
 from .core import elastoplastic as _ep
@@ -95,6 +96,7 @@ KEYS: dict[str, str] = {
     "profile_shift": "profile shift coefficient x of a gear hub given by module + teeth (default 0)",
     "helix_angle": "helix angle β of a gear hub given by module + teeth, e.g. '15 deg' (default 0)",
 }
+KEYS.update(_shaft.PRESSFIT_KEYS)  # the shaft at the hub edge (DIN 743), fitcheck.shaft
 
 #: (step of the method in words, standard clause or book equation) for the report.
 METHOD_NOTES: list[tuple[str, str]] = [
@@ -130,6 +132,7 @@ METHOD_NOTES: list[tuple[str, str]] = [
     ("Not implemented: end effects at the hub faces, "
      "fretting fatigue of the shaft", "DIN 7190-1:2017 (elastic-plastic range)"),
 ]
+METHOD_NOTES.extend(_shaft.METHOD_NOTES)
 
 REF_SLIP = "DIN 7190-1:2017 (transmissible torque and axial force); Shigley, 10th ed., sec. 7-8"
 REF_HUB = "DIN 7190-1:2017 (elastic design, hub bore); von Mises, Shigley, 10th ed., eq. (5-12)"
@@ -243,6 +246,7 @@ def _material_mapping(m: Material):
     out["source"] = m.source
     if m.note:
         out["note"] = m.note
+    out.update(_materials.fatigue_mapping(m))
     return out
 
 
@@ -299,6 +303,7 @@ class PressFitInput:
     temperature_max: float | None = None     # [°C] highest ambient (both parts)
     profile_shift: float = 0.0               # [-] gear hub
     helix_angle: float = 0.0                 # [rad] gear hub
+    shaft_loads: _shaft.ShaftLoads = _shaft.ShaftLoads()  # shaft at the hub edge (DIN 743)
 
     # ------------------------------------------------------------------ reading
     @classmethod
@@ -466,6 +471,7 @@ class PressFitInput:
             if k in v and v[k] > 0.2:
                 errs.add(InputError(f"{field}.{k}", g(k), "a roughness depth of at most 200 um",
                                     "units mixed up?"))
+        v["shaft_loads"] = _shaft.ShaftLoads.from_mapping(mapping, field, errs, _shaft.PRESSFIT_KEYS)
         errs.raise_if_any()
         return cls(**v)
 
@@ -520,6 +526,7 @@ class PressFitInput:
             out["profile_shift"] = self.profile_shift
         if self.helix_angle:
             out["helix_angle"] = f"{self.helix_angle!r} rad"
+        out.update(self.shaft_loads.to_mapping())
         return out
 
     # ------------------------------------------------------------------ derived
@@ -713,6 +720,7 @@ class PressFitResult:
     temperature_min: float | None = None
     temperature_max: float | None = None
     headline: str = ""
+    shaft: _shaft.ShaftSeatResult | None = None  # the shaft at the hub edge (DIN 743)
 
     @property
     def ok(self) -> bool:
@@ -854,6 +862,7 @@ class PressFitResult:
             "temperature_max_C": self.temperature_max,
             "states": [c.to_dict() for c in self.states],
             "headline": self.headline,
+            **_shaft.json_fields(self.shaft),
         }
 
 
@@ -1127,6 +1136,11 @@ def evaluate(inp: PressFitInput) -> PressFitResult:
     if Do / d < 1.2:
         warns.append(f"thin hub (Do/d = {Do / d:.2f}): the hub's own stiffness and the plane-stress model "
                      "become uncertain")
+    shaft = _shaft.evaluate_seat(d=d, di=inp.shaft_bore, material=s, rz_um=inp.rz_shaft * 1000.0,
+                                 loads=inp.shaft_loads, torque=inp.torque, axial_force=inp.axial_force,
+                                 temperature=Ts, what="hub", module=inp.module, teeth=inp.teeth)
+    checks.extend(shaft.checks)
+    warns.extend(shaft.warnings)
     for msg in warns:
         warnings.warn(f"{label}: {msg}", MethodRangeWarning, stacklevel=2)
     headline = _headline(checks, r, state_lo, state_tight, state_shaft, state_loose, why_zero, w)
@@ -1148,7 +1162,7 @@ def evaluate(inp: PressFitInput) -> PressFitResult:
         press_force_max=r["press_force_max"], shrink_temperature_C=r["shrink_temperature"],
         joining_clearance=jc, loosening_speed=r["loosening_speed"],
         governing_tight_condition="operating" if tight_op else "assembly",
-        checks=tuple(checks), warnings=tuple(warns),
+        checks=tuple(checks), warnings=tuple(warns) + shaft.notes, shaft=shaft,
         design=inp.design, plastic_zone_diameter=r["plastic_zone_diameter_max"],
         plastic_utilisation=r["plastic_utilisation"], plastic_zone_limit=inp.plastic_zone_limit,
         loosest_governing=loosest_gov, tightest_governing=tightest_gov, states=tuple(states),

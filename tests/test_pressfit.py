@@ -303,7 +303,8 @@ def test_json_keys_and_checks():
         assert key in j
     names = {c["name"] for c in j["checks"]}
     assert names == {"slip at loosest fit", "hub yield at tightest fit", "shaft yield at tightest fit",
-                     "loosening speed", "hub heating temperature"}
+                     "loosening speed", "hub heating temperature", "shaft fatigue at the hub edge",
+                     "shaft yield at the hub edge"}
     assert all(c["reference"] for c in j["checks"])
     json.dumps(j, allow_nan=True)
 

@@ -34,6 +34,7 @@ JSON_KEYS = (
     "clearance_probability_below", "clearance_distribution", "clearance_worst_case_um",
     "smallest_group_worst_case", "clearance_states", "temperature_min_C", "temperature_max_C", "headline",
 )
+JSON_KEYS += ("shaft_fatigue_safety", "shaft_static_safety", "notch_factor_bending", "notch_factor_torsion")
 
 _OPTIONS = {  # option dest -> [[bearing]] key
     "shaft": "shaft", "housing": "housing", "tolerance_class": "tolerance_class",
@@ -46,6 +47,7 @@ _OPTIONS = {  # option dest -> [[bearing]] key
     "t_assembly": "temperature_assembly", "axial_force": "axial_force",
     "axial_location": "axial_location", "clearance_min": "clearance_min",
 }
+_OPTIONS.update(bending_moment="bending_moment", torque="torque", torque_type="torque_type")  # DIN 743 shaft
 
 
 def add_arguments(p) -> None:
@@ -73,6 +75,10 @@ def add_arguments(p) -> None:
     p.add_argument("--axial-force", dest="axial_force", help="axial force, e.g. '300 N'")
     p.add_argument("--axial-location", dest="axial_location", help="shoulder, circlip or none")
     p.add_argument("--clearance-min", dest="clearance_min", help="smallest operating clearance, e.g. '2 um'")
+    p.add_argument("--bending-moment", dest="bending_moment", help="rotating bending moment in the shaft at "
+                   "the ring edge, e.g. '5 N*m' (DIN 743 shaft check)")
+    p.add_argument("--torque", help="torque in the shaft at the seat, e.g. '10 N*m'")
+    p.add_argument("--torque-type", dest="torque_type", help="static, pulsating or alternating (default)")
     p.add_argument("--json", action="store_true", help="print the results as JSON")
 
 

@@ -149,6 +149,8 @@ def _details(r: bearings.BearingSeatResult, system: str, name: str) -> None:
     widgets.show_checks(r.checks, system, key=f"{PREFIX}.checks")
     for n in r.notes:
         st.caption("• " + widgets.esc(n))
+    from fitcheck.ui import shaft_box
+    shaft_box.render(getattr(r, "shaft", None), system, key=f"{PREFIX}.shaft", notes=False)
     st.subheader("Clearance budget")
     widgets.kv_table([
         (f"initial clearance, group {r.clearance_group}", um(r.initial_clearance_um)),

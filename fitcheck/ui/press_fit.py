@@ -152,6 +152,8 @@ def _governing(r: pressfit.PressFitResult, attr: str, value: float) -> str:
 def _details(r: pressfit.PressFitResult, system: str, name: str) -> None:
     st.subheader("Checks")
     widgets.show_checks(r.checks, system, key=f"{PREFIX}.checks")
+    from fitcheck.ui import shaft_box
+    shaft_box.render(getattr(r, "shaft", None), system, key=f"{PREFIX}.shaft")
     left, right = st.columns([1, 1], gap="large")
     with left:
         st.subheader("Loosest and tightest")
