@@ -36,6 +36,15 @@ class Advice:
 
 # (table, words all in the check name, cause, next step, action); first match wins
 _RULES: tuple[tuple[str, tuple[str, ...], str, str, str | None], ...] = (
+    *((t, ("shaft fatigue",), "bending and torque at the edge of the seat exceed the shaft's fatigue "
+       "strength with the notch of the press fit (DIN 743)", "a larger shaft diameter, a stronger or "
+       "surface-hardened shaft, a relief groove at the seat edge, or lower loads", None)
+      for t in ("pressfit", "bearing")),
+    *((t, ("yield", "edge"), "the peak loads at the edge of the seat exceed the shaft's yield "
+       "strength (DIN 743)", "a larger shaft diameter or a stronger shaft material", None)
+      for t in ("pressfit", "bearing")),
+    ("pressfit", ("plastic zone",), "the hub yields deeper into its wall than the design permits",
+     "a looser fit, a thicker hub or a stronger hub material — search fits", FIT_SEARCH),
     ("pressfit", ("slip",), "the loosest fit carries less than the torque and thrust times the "
      "required slip safety: the joint may slip",
      "a tighter fit, a longer hub or rougher, dry surfaces — search fits", FIT_SEARCH),

@@ -31,6 +31,7 @@ from __future__ import annotations
 import itertools
 import math
 import re
+import warnings
 from collections.abc import Iterable, Mapping
 from dataclasses import dataclass, field, fields
 
@@ -349,6 +350,11 @@ def search_fits(joint, *, holes=DEFAULT_HOLES, shaft_grades=DEFAULT_SHAFT_GRADES
 
     shrink = bool(a["shrink"])
     press_given = math.isfinite(a["press_force_limit"])
+    # the shaft at the hub edge (DIN 743) does not depend on the fit: the same checks for every candidate
+    from .pressfit.evaluate import shaft_at_hub_edge
+    with warnings.catch_warnings():
+        warnings.simplefilter("ignore")
+        shaft_checks = tuple(shaft_at_hub_edge(joint, d).checks)
     preferred = {p.fit for p in fits.preferred_fits()}
 
     # verdicts on arrays (the same comparisons as the Check objects)
@@ -362,6 +368,7 @@ def search_fits(joint, *, holes=DEFAULT_HOLES, shaft_grades=DEFAULT_SHAFT_GRADES
         ok &= r["shrink_temperature"] <= a["max_heating"]
     if press_given and not shrink:
         ok &= r["press_force_max"] <= a["press_force_limit"]
+    ok &= all(c.passed for c in shaft_checks)
 
     def label(c) -> str:  # "H7/s6", or the B4.1 class "FN2"
         return c[2][len("ANSI B4.1 "):] if c[2].startswith("ANSI B4.1 ") else f"{c[0]}/{c[1]}"
@@ -381,7 +388,7 @@ def search_fits(joint, *, holes=DEFAULT_HOLES, shaft_grades=DEFAULT_SHAFT_GRADES
             shaft_yield_safety=float(r["shaft_yield_safety"][i]),
             press_force_max=float(r["press_force_max"][i]),
             shrink_temperature=float(r["shrink_temperature"][i]),
-            checks=_checks_for(i, r, a, shrink, press_given))
+            checks=_checks_for(i, r, a, shrink, press_given) + shaft_checks)
 
     pas = np.flatnonzero(ok)
     rej = np.flatnonzero(~ok)

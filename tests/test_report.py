@@ -226,7 +226,7 @@ def test_inch_report_gives_limits_in_both_systems(demo_result):
     assert "16.018 mm" in hole and "(0.63063 in)" in hole  # 16.018 / 25.4
     rows = {r.name: r for r in rep.summary}
     assert rows["press-in force"].value.endswith("lbf")
-    assert rows["operating radial clearance (tightest pairing)"].value.endswith(" in")
+    assert rows["operating radial clearance (mean, probable combination)"].value.endswith(" in")
     assert items["tightening torque (wrench setting)"].endswith("lbf·in")
     text = _html_text(report.to_html(rep))
     assert "Units: inch system" in text and "°F" in text

@@ -291,9 +291,7 @@ def evaluate(inp: PressFitInput) -> PressFitResult:
     if Do / d < 1.2:
         warns.append(f"thin hub (Do/d = {Do / d:.2f}): the hub's own stiffness and the plane-stress model "
                      "become uncertain")
-    shaft = _shaft.evaluate_seat(d=d, di=inp.shaft_bore, material=s, rz_um=inp.rz_shaft * 1000.0,
-                                 loads=inp.shaft_loads, torque=inp.torque, axial_force=inp.axial_force,
-                                 temperature=Ts, what="hub", module=inp.module, teeth=inp.teeth)
+    shaft = shaft_at_hub_edge(inp, d)
     checks.extend(shaft.checks)
     warns.extend(shaft.warnings)
     for msg in warns:
@@ -398,3 +396,12 @@ def _headline(checks, r, state_lo, state_tight, state_shaft, state_loose, why_ze
             out.append(f"{c.name[0].upper()}{c.name[1:]} {c.value:.4g} {c.unit} exceeds {c.limit:.4g} "
                        f"{c.unit}. Next: {'cool the shaft or a looser fit' if 'heating' in c.name else 'a stronger press or a looser fit'}")
     return "Does not hold. " + " ".join(x.rstrip(".") + "." for x in out)
+
+
+def shaft_at_hub_edge(inp: PressFitInput, d: float):
+    """The shaft at the hub edge (DIN 743, :func:`fitcheck.shaft.evaluate_seat`) of a press fit of
+    diameter ``d`` [mm]; it does not depend on the fit, so the fit search adds it to every candidate."""
+    return _shaft.evaluate_seat(d=d, di=inp.shaft_bore, material=inp.shaft_material,
+                                rz_um=inp.rz_shaft * 1000.0, loads=inp.shaft_loads, torque=inp.torque,
+                                axial_force=inp.axial_force, temperature=inp.temperature_shaft, what="hub",
+                                module=inp.module, teeth=inp.teeth)

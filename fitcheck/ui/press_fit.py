@@ -142,8 +142,10 @@ def _summary(r: pressfit.PressFitResult, system: str, name: str) -> None:
 
 def _governing(r: pressfit.PressFitResult, attr: str, value: float) -> str:
     """The name of the tolerance case (column of the cases table) a headline figure comes from."""
-    for case in (r.loosest_operating, r.loosest_assembly, r.tightest_operating,
-                 r.tightest_assembly):
+    for case in (r.loosest_governing, r.tightest_governing, r.loosest_operating, r.loosest_assembly,
+                 r.tightest_operating, r.tightest_assembly):
+        if case is None:
+            continue
         if getattr(case, attr) == value:
             return case.label
     return "—"
@@ -160,6 +162,10 @@ def _details(r: pressfit.PressFitResult, system: str, name: str) -> None:
         cases = [r.loosest_operating, r.tightest_operating, r.loosest_assembly, r.tightest_assembly]
         heads = ["loosest, operating", "tightest, operating", "loosest, assembly",
                  "tightest, assembly"]
+        if r.loosest_governing is not None and r.tightest_governing is not None:
+            # the governing operating states first: the headline figures are theirs
+            cases = [r.loosest_governing, r.tightest_governing, *cases]
+            heads = ["loosest, governing state", "tightest, governing state", *heads]
         rows = [
             ("interference, measured", "interference", "small_length_mm"),
             ("interference, effective", "effective_interference", "small_length_mm"),
