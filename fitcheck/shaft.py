@@ -157,7 +157,7 @@ class ShaftLoads:
         parse("helix_angle", lambda x, k: to_core(x, "angle", k, lo=0.0, hi=math.radians(45.0)))
         for k in ("bearing_distance_a", "bearing_distance_b", "overhang"):
             parse(k, lambda x, kk: to_core(x, "length", kk, lo=0.0, lo_open=True, hi=10_000.0))
-        has_ab = [k in mapping for k in ("bearing_distance_a", "bearing_distance_b")]
+        has_ab = [mapping.get(k) is not None for k in ("bearing_distance_a", "bearing_distance_b")]
         if any(has_ab) and not all(has_ab):
             missing = "bearing_distance_b" if has_ab[0] else "bearing_distance_a"
             errs.add(InputError(f"{field}.{missing}", None, "a value (both bearing distances go together)"))
@@ -408,7 +408,8 @@ def evaluate_seat(*, d: float, di: float, material: Material, rz_um: float, load
     if loads.bending_moment is not None:
         M, source = KA * loads.bending_moment, "given"
     elif module is not None and teeth is not None and (
-            loads.bearing_distance_a is not None or loads.overhang is not None):
+            (loads.bearing_distance_a is not None and loads.bearing_distance_b is not None)
+            or loads.overhang is not None):
         ft, fr, fa, dw = (float(x) for x in mesh_forces(T, module, teeth, loads.pressure_angle,
                                                         loads.helix_angle))
         if loads.overhang is not None:

@@ -87,8 +87,15 @@ def _walk(obj, where="result", seen=None):
             yield from _walk(x, f"{where}[{i}]", seen)
 
 
+#: Result fields that are NaN by their documented meaning "not applicable to this joint" (no nut
+#: under a tapped screw, no gasket, no engagement in a through-bolted joint).
+NOT_APPLICABLE = ("surface_pressure_nut", "p_G_nut", "gasket_pressure", "engagement", "engagement_min")
+
+
 def _check_result(result) -> None:
     for where, x in _walk(result):
+        if where.rsplit(".", 1)[-1] in NOT_APPLICABLE:
+            continue
         assert not math.isnan(x), f"{where} is NaN"
         last = where.rsplit(".", 1)[-1]
         if any(w in last for w in CAPACITIES) and math.isfinite(x):
@@ -215,7 +222,7 @@ cli_values = st.one_of(
 )
 
 
-@settings(FUZZ, max_examples=max(N // 4, 50))
+@settings(FUZZ, max_examples=max(N // 4, 50), suppress_health_check=[HealthCheck.function_scoped_fixture, HealthCheck.too_slow, HealthCheck.filter_too_much])
 @given(data=st.data())
 def test_command_line(data, cli, tmp_path_factory):
     cmd = data.draw(st.sampled_from(sorted(COMMANDS)))

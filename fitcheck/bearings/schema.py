@@ -225,7 +225,7 @@ class BearingSeatInput:
         take("shaft_material", lambda v, k: materials.from_mapping(v, k))
         take("housing_material", lambda v, k: materials.from_mapping(v, k))
         take("housing_outer_diameter", lambda v, k: to_core(v, "length", k, lo=0, lo_open=True))
-        take("housing_wall", lambda v, k: to_core(v, "length", k, lo=0, lo_open=True))
+        take("housing_wall", lambda v, k: to_core(v, "length", k, lo=0.1, hi=1e4))  # a real wall
         if "housing_outer_diameter" in m and "housing_wall" in m:
             errs.add(InputError(f"{field}.housing_wall", m["housing_wall"],
                                 "only one of housing_outer_diameter and housing_wall"))

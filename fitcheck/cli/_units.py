@@ -47,17 +47,18 @@ class Writer:
 
 def case_system(args) -> str:
     """The ``unit_system`` of the case file a command was given (SI when none or unreadable)."""
-    import tomllib
     from pathlib import Path
+
+    from ..errors import FitcheckError
+    from ..tomlread import read_toml
 
     for attr in ("case", "cases", "paths", "path", "file", "files", "case_file", "input"):
         v = getattr(args, attr, None)
         for item in (v if isinstance(v, list | tuple) else [v]):
             if isinstance(item, str) and item.endswith(".toml") and Path(item).is_file():
-                try:
-                    with open(item, "rb") as f:
-                        u = tomllib.load(f).get("unit_system", "SI")
-                except (OSError, ValueError):
+                try:  # the project's bounded reader: a hostile file is refused later by the command
+                    u = read_toml(item).get("unit_system", "SI")
+                except (OSError, ValueError, FitcheckError):
                     return "SI"
                 return "inch" if isinstance(u, str) and u.strip().lower() == "inch" else "SI"
     return "SI"
