@@ -48,7 +48,6 @@ import importlib
 import importlib.resources
 import math
 import os
-import tempfile
 import warnings
 from collections.abc import Iterator, Mapping
 from dataclasses import dataclass, field
@@ -758,34 +757,14 @@ def _smallest_change(eng: Engine, name: str, inp, old: dict, conditions: Mapping
 def save(case: DesignCase, path: str | os.PathLike) -> Path:
     """Write the case to ``path`` atomically.
 
-    The text goes to a temporary file in the same folder, is flushed to disk and
-    then renamed over ``path`` with :func:`os.replace`; a crash or an error at any
-    point leaves the old file as it was and no temporary file behind.
+    The text goes to an exclusive temporary file in the same folder, is flushed to disk and
+    then renamed over ``path`` (:func:`fitcheck.safefile.atomic_write`); a crash or an error at
+    any point leaves the old file as it was and no temporary file behind.
     """
-    target = Path(path)
+    from .safefile import atomic_write
+
     data = dumps(case).encode("utf-8")  # checked: it loads back as this case, or nothing is written
-    folder = target.parent if str(target.parent) else Path(".")
-    fd, tmp = tempfile.mkstemp(prefix=f".{target.name}.", suffix=".tmp", dir=folder)
-    try:
-        with os.fdopen(fd, "wb") as f:
-            f.write(data)
-            f.flush()
-            os.fsync(f.fileno())
-        try:
-            mode = target.stat().st_mode & 0o777
-        except FileNotFoundError:
-            umask = os.umask(0)
-            os.umask(umask)
-            mode = 0o666 & ~umask
-        os.chmod(tmp, mode)
-        os.replace(tmp, target)
-    except BaseException:
-        try:
-            os.unlink(tmp)
-        except FileNotFoundError:
-            pass
-        raise
-    return target
+    return atomic_write(path, lambda f: f.write(data))
 
 
 # --------------------------------------------------------------------------- evaluating
