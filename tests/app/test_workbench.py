@@ -174,14 +174,16 @@ def _run_study_and_search(at) -> None:
 
 
 @pytest.mark.parametrize("page", ["press_fit", "bearing_seat", "housing_screws", "fit_limits",
-                                  "whole_case", "lot_study"])
+                                  "whole_case", "lot_study", "seat_search", "case_file"])
 @pytest.mark.parametrize("system", ["SI", "inch"])
 def test_every_number_follows_the_format(app_test, page, system):
     doc = failing_doc() if page == "whole_case" else demo_doc()
     query = addr(doc) if page == "whole_case" else {}
     if system == "inch":
         query["u"] = system
-    at = app_test(page, query=query or None)
+    if page == "seat_search":  # the lot-study page with a bearing seat: the seat-class search
+        query["search"] = "bearing:A-side-6202"
+    at = app_test("lot_study" if page == "seat_search" else page, query=query or None)
     if page == "lot_study":
         _run_study_and_search(at)
     assert not at.exception
