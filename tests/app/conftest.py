@@ -24,7 +24,6 @@ APP = ROOT / "streamlit_app.py"
 CHROMIUM_CANDIDATES = ("/usr/bin/chromium", "/usr/lib/chromium/chromium", "/usr/bin/chromium-browser")
 CHROMIUM_ARGS = ["--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run",
                  "--disable-background-networking", "--disable-component-update", "--disable-sync"]
-SKELETON = '[data-testid="stSkeleton"]'
 IDLE = '[data-testid="stApp"][data-test-script-state="notRunning"][data-test-connection-state="CONNECTED"]'
 
 
@@ -145,8 +144,5 @@ def wait_idle():
 
     def wait(pg, timeout: float = 30_000) -> None:
         pg.wait_for_selector(IDLE, timeout=timeout)
-        # idle is not yet drawn: an element kind's code loads on first use behind a skeleton
-        pg.wait_for_function(f"() => document.querySelector('{SKELETON}') === null",
-                             timeout=timeout, polling=100)
 
     return wait

@@ -17,7 +17,7 @@ from fitcheck import case as casefile
 from fitcheck import fits, tomlwrite
 from fitcheck.ui import unitsys
 
-from .conftest import IDLE, SKELETON
+from .conftest import IDLE
 
 pytestmark = pytest.mark.browser
 
@@ -137,6 +137,8 @@ window.__last = performance.now();
 new MutationObserver(() => { window.__last = performance.now(); }).observe(document, {
   attributes: true, childList: true, subtree: true, characterData: true});
 """
+#: Streamlit loads the code of an element kind on its first use and shows a skeleton meanwhile
+SKELETON = '[data-testid="stSkeleton"]'
 _SETTLED = (f"() => performance.now() - window.__last > {QUIET_MS} && "
             f"document.querySelector('{IDLE}') !== null && "
             f"document.querySelector('{SKELETON}') === null")
