@@ -236,7 +236,7 @@ def roughness_factors(rz_um, sigma_B_d):
 
     (DIN 743 form from memory.) K_Fσ is the same function as the FKM guideline's roughness
     factor K_R,σ = 1 − a_R,σ·lg Rz·lg(2·R_m/R_m,N,min) with the published steel constants
-    a_R,σ = 0.22, R_m,N,min = 400 MPa (FKM guideline, 6th ed. 2012); checked in
+    a_R,σ = 0.22, R_m,N,min = 400 MPa (FKM guideline, Analytical strength assessment); checked in
     tests/validation/test_din743_published.py.
 
     Examples

@@ -2,8 +2,9 @@
 
 Sources read, and what each one confirms:
 
-* FKM guideline "Analytical strength assessment of components", 6th revised ed. 2012 (VDMA
-  Verlag; English version of the 5th ed. 2003 likewise): roughness factor
+* FKM guideline "Analytical strength assessment of components" (VDMA Verlag; the restating
+  article below names no edition — title pages of the 5th ed. 2003 and the 6th ed. 2012 were
+  seen, their text not): roughness factor
   ``K_R,σ = 1 − a_R,σ·lg(Rz/µm)·lg(2·R_m/R_m,N,min)`` with ``a_R,σ = 0.22`` and
   ``R_m,N,min = 400 MPa`` for steel (its table of a_R and R_m,N,min lists GS 0.20/400,
   GJS 0.16/400, GJM 0.12/350, GJL 0.06/100, wrought aluminium 0.22/133, cast aluminium
@@ -43,7 +44,7 @@ from fitcheck.shaft import ShaftLoads, evaluate_seat
 
 
 def _fkm_kr_steel(rz_um, rm):
-    # FKM guideline, 6th ed. 2012: K_R,σ = 1 − a_R,σ·lg Rz·lg(2·Rm/Rm,N,min), steel a_R,σ = 0.22,
+    # FKM guideline: K_R,σ = 1 − a_R,σ·lg Rz·lg(2·Rm/Rm,N,min), steel a_R,σ = 0.22,
     # Rm,N,min = 400 MPa (read as restated in quadco.engineering, "Surface Roughness Factor KR")
     return 1.0 - 0.22 * math.log10(rz_um) * math.log10(2.0 * rm / 400.0)
 
