@@ -473,7 +473,7 @@ def evaluate_seat(*, d: float, di: float, material: Material, rz_um: float, load
         warns.append(f"tensile strength {m.Rm:g} MPa of {m.name} outside about 400 … 1200 MPa, the range "
                      "behind DIN 743-2's press-fit notch factors (from memory)")
     if bad["temperature"]:
-        warns.append(f"shaft temperature {temperature:g} degC outside DIN 743's −40 … 150 degC")
+        warns.append(f"shaft temperature {temperature:g} degC outside DIN 743's −40 … 150 degC (from memory)")
     if m.group != "steel":
         warns.append(f"shaft material {m.name} ({m.group}): DIN 743 is written for steels; "
                      "the given fatigue strengths are used as they are")

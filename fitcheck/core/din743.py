@@ -424,8 +424,8 @@ def validity(d, sigma_B_dB, temperature=20.0):
     Returns a dict of boolean arrays: ``diameter`` (notch-factor size conversion defined
     from 7.5 to 150 mm), ``strength`` (press-fit notch factors from tests on steels of
     σ_B about 400 … 1200 MPa) — both from memory — and ``temperature`` (DIN 743 scope
-    −40 … +150 °C, as stated in lecture notes "Maschinenelemente — Wellen", Festigkeitsnachweis,
-    inggo.com teachnet).
+    −40 … +150 °C, as stated for DIN 743:2000 in lecture notes "Maschinenelemente — Wellen",
+    Festigkeitsnachweis, inggo.com teachnet; unchanged in 2012 — from memory).
 
     >>> {k: bool(v) for k, v in validity(20.0, 700.0).items()}
     {'diameter': False, 'strength': False, 'temperature': False}

@@ -13,8 +13,10 @@ Sources read, and what each one confirms:
   Factor KR" of quadco.engineering. For steel ``lg(2·R_m/400) = lg(R_m/20) − 1``: the FKM
   factor is the same function as DIN 743-2's K_Fσ, which fitcheck types from memory.
 * Lecture notes "Maschinenelemente — Wellen", chapter "Festigkeitsnachweis", Einführung
-  (inggo.com, teachnet): DIN 743 is limited to steel; temperature range −40 °C … 150 °C;
-  corrosion-free surroundings; tension/compression, bending and torsion, alone or combined.
+  (inggo.com, teachnet; the notes' preface names DIN 743:2000-10, the edition before 2012):
+  DIN 743 is limited to steel; temperature range −40 °C … 150 °C; corrosion-free surroundings;
+  tension/compression, bending and torsion, alone or combined. That the 2012 edition keeps this
+  scope is from memory.
 * FKM research report no. 325 (2015, project 294 II), "Untersuchungen zum Größeneinfluss auf
   die Gestaltfestigkeit / Kerbwirkungszahlen von Welle-Nabe-Verbindungen", publisher's
   abstract (VDMA shop page): the notch factors of press fits rest on rotating-bending tests at
