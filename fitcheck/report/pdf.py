@@ -205,13 +205,22 @@ def _check_table(rows, width, with_joint):
 
 
 def _image(fig, caption, width, heading=None):
+    """A plot as a flowable: a vector Drawing for a chart, else the PNG as an image."""
     from reportlab.platypus import Image, KeepTogether
 
     w_pt = min(width * 0.7, fig.width_px / 120 * 72 * 0.8)
-    h_pt = w_pt * fig.aspect
-    if h_pt > 230:
-        h_pt, w_pt = 230, 230 / fig.aspect
-    img = Image(io.BytesIO(fig.png), width=w_pt, height=h_pt)
+    if fig.chart is not None:
+        from .chart import to_drawing
+
+        w_pt = min(width * 0.72, fig.chart.width * 1.0)
+        if w_pt * fig.aspect > 230:
+            w_pt = 230 / fig.aspect
+        img = to_drawing(fig.chart, w_pt)
+    else:
+        h_pt = w_pt * fig.aspect
+        if h_pt > 230:
+            h_pt, w_pt = 230, 230 / fig.aspect
+        img = Image(io.BytesIO(fig.png), width=w_pt, height=h_pt)
     img.hAlign = "LEFT"
     return KeepTogether(([heading] if heading is not None else []) + [img, _p(caption, "caption")])
 
