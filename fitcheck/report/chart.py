@@ -160,12 +160,16 @@ def nice_ticks(lo: float, hi: float, n: int = 6) -> tuple[list[float], float]:
     [0.0, 10.0, 20.0, 30.0]
     >>> nice_ticks(-39.0, 10.0)
     ([-30.0, -20.0, -10.0, 0.0, 10.0], 10.0)
+    >>> nice_ticks(-32.9, 92.3)[0]
+    [-20.0, 0.0, 20.0, 40.0, 60.0, 80.0]
     """
     if not (math.isfinite(lo) and math.isfinite(hi)) or hi <= lo:
         return [lo], 1.0
     raw = (hi - lo) / max(n - 1, 1)
     e = 10.0 ** math.floor(math.log10(raw))
-    step = next(m * e for m in (1, 2, 2.5, 5, 10) if m * e >= raw * 0.999)
+    # the finest round step that gives at most n + 1 ticks
+    step = next(m * e for m in (0.5, 1, 2, 2.5, 5, 10, 20)
+                if math.floor(hi / (m * e) + 1e-9) - math.ceil(lo / (m * e) - 1e-9) + 1 <= n + 1)
     first = math.ceil(lo / step - 1e-9)
     out = []
     k = first
