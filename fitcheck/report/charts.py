@@ -205,6 +205,10 @@ BUILDERS = {
 }
 
 
+for _spec, _fn in BUILDERS.items():
+    _fn.plot_name = _spec.partition(":")[2]  # the caption of the plot it stands for
+
+
 def builder(fn):
     """The chart builder standing for a matplotlib plot function, or None."""
     return BUILDERS.get(f"{getattr(fn, '__module__', '')}:{getattr(fn, '__name__', '')}")

@@ -261,14 +261,27 @@ def _plots(jr, eng, system: str) -> tuple[list[_figures.Figure], list[str]]:
             figs.append(_figures.from_chart(charts.fit_chart(f, system), caption))
         except Exception as exc:  # a plot must not hide the rest of the report
             errors.append(f"{caption}: {type(exc).__name__}: {exc}")
-    for fn in eng.plot_functions():
-        caption = fn.__name__.removeprefix("plot_").replace("_", " ").capitalize()
+    specs = getattr(eng, "plots", None)
+    # a plot with a chart builder is drawn without importing its matplotlib module
+    todo = ([charts.BUILDERS.get(spec) or spec for spec in specs] if specs is not None
+            else eng.plot_functions())
+    for item in todo:
+        if isinstance(item, str):  # "module:function" of a matplotlib plot without a builder
+            mod_name, _, fn_name = item.partition(":")
+            try:
+                import importlib
+
+                item = getattr(importlib.import_module(mod_name), fn_name)
+            except (ImportError, AttributeError):  # a missing plot module is skipped
+                continue
+        name = getattr(item, "plot_name", None) or item.__name__
+        caption = name.removeprefix("plot_").replace("_", " ").capitalize()
         try:
-            make = charts.builder(fn)
+            make = item if getattr(item, "plot_name", None) else charts.builder(item)
             if make is not None:
                 figs.append(_figures.from_chart(make(jr.result, system), caption))
             else:
-                fig, converted = _figures.draw(fn, jr.result, system)
+                fig, converted = _figures.draw(item, jr.result, system)
                 figs.append(_figures.render(fig, caption, system, converted))
         except Exception as exc:  # a plot must not hide the rest of the report
             errors.append(f"{caption}: {type(exc).__name__}: {exc}")

@@ -26,12 +26,15 @@ PASS_COLOR, FAIL_COLOR, CAUTION_COLOR = "#007755", "#bb0000", "#884400"
 @functools.cache
 def _fonts() -> str:
     """Register DejaVu Sans (regular, bold, italic) once; returns the family name."""
-    import matplotlib
+    import importlib.util
+
     from reportlab.lib.fonts import addMapping
     from reportlab.pdfbase import pdfmetrics
     from reportlab.pdfbase.ttfonts import TTFont
 
-    d = Path(matplotlib.get_data_path()) / "fonts" / "ttf"
+    # matplotlib's data folder, found without importing matplotlib
+    spec = importlib.util.find_spec("matplotlib")
+    d = Path(next(iter(spec.submodule_search_locations))) / "mpl-data" / "fonts" / "ttf"
     faces = {"": "DejaVuSans.ttf", "-Bold": "DejaVuSans-Bold.ttf",
              "-Oblique": "DejaVuSans-Oblique.ttf", "-BoldOblique": "DejaVuSans-BoldOblique.ttf"}
     for suffix, file in faces.items():
