@@ -10,6 +10,7 @@ is asserted on pixels.
 from __future__ import annotations
 
 import html
+import io
 import math
 import os
 import re
@@ -363,3 +364,17 @@ def test_nice_ticks_are_round_and_inside(lo, span):
     assert any(math.isclose(mant, m, rel_tol=1e-9) for m in (1, 2, 2.5, 5, 10))
     tol = 1e-9 * max(abs(lo), abs(hi), step)
     assert all(lo - tol <= t <= hi + tol for t in ticks)
+
+
+def test_a_plot_without_chart_builder_is_still_drawn_as_png(demo_result, monkeypatch):
+    from fitcheck.report import charts
+
+    spec = "fitcheck.plots.screws:plot_joint_diagram"
+    monkeypatch.delitem(charts.BUILDERS, spec)
+    rep = report.build(demo_result)
+    screw = rep.sections[-1].figures
+    assert len(screw) == 1 and screw[0].chart is None and screw[0].png.startswith(b"\x89PNG")
+    assert report.to_html(rep).count("data:image/png;base64,") == 1
+    buf = io.BytesIO()
+    report.to_pdf(rep, buf)
+    assert buf.getvalue().startswith(b"%PDF")
