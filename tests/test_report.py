@@ -378,3 +378,30 @@ def test_a_plot_without_chart_builder_is_still_drawn_as_png(demo_result, monkeyp
     buf = io.BytesIO()
     report.to_pdf(rep, buf)
     assert buf.getvalue().startswith(b"%PDF")
+
+
+def test_charts_of_a_plastic_hub_and_an_opening_joint(demo_result):
+    import warnings
+
+    from fitcheck import screws
+    from fitcheck.pressfit import PressFitInput
+    from fitcheck.pressfit import evaluate as evaluate_pressfit
+    from fitcheck.report import chart, charts
+
+    gear = {"name": "alu gear", "interference_min": "90 um", "interference_max": "140 um",
+            "diameter": "20 mm", "length": "12 mm", "hub_outer_diameter": "30 mm",
+            "shaft_material": "C45E", "hub_material": "EN AW-6082-T6", "torque": "15 N*m",
+            "design": "elastic-plastic"}
+    cover = dict(demo_result.joints[-1].input.to_mapping(), load_eccentricity="3 mm",
+                 interface_depth="14 mm", tilting_moment="40 N*m")
+    with warnings.catch_warnings():
+        warnings.simplefilter("ignore")
+        pf = evaluate_pressfit(PressFitInput.from_mapping(gear))
+        sj = screws.evaluate(screws.ScrewJointInput.from_mapping(cover))
+    for system, mm in (("SI", "mm"), ("inch", "in")):
+        walls = chart.layout(charts.wall_stresses(pf, system))
+        assert any(op[3].startswith("plastic zone to Ø") and op[3].endswith(f"{mm} deep)")
+                   for op in walls.ops if op[0] == "text")
+        joint = chart.layout(charts.joint_diagram(sj, system))
+        assert any(op[3].startswith("opening at FAab = ") for op in joint.ops if op[0] == "text")
+        assert "<svg" in chart.to_svg(joint) and chart.to_drawing(walls, 300.0).width == 300.0
