@@ -10,6 +10,8 @@ is asserted on pixels.
 from __future__ import annotations
 
 import html
+import io
+import math
 import os
 import re
 import shutil
@@ -19,6 +21,8 @@ from pathlib import Path
 import markupsafe
 import pypdf
 import pytest
+from hypothesis import given, settings
+from hypothesis import strategies as st
 
 from fitcheck import CAUTION, report
 from fitcheck import case as case_mod
@@ -183,7 +187,7 @@ def test_html_is_self_contained_from_the_template(demo_result, demo_html):
     assert "http://" not in demo_html and "https://" not in demo_html and "<script" not in demo_html
     # press fit: zone diagram + wall stresses + capacity band; each bearing: two seat zones +
     # clearance budget; screws: joint diagram
-    assert demo_html.count("data:image/png;base64,") == 3 + 2 * 3 + 1
+    assert demo_html.count("<figure><svg ") == 3 + 2 * 3 + 1  # vector charts, inline
     assert "Plot not drawn" not in demo_html
     assert "@media print" in demo_html and "display:table-header-group" in demo_html
     for role in report.SIGNATURE_ROLES:
@@ -301,3 +305,103 @@ def test_report_of_a_failing_case_says_fail_and_exits_1(cli, tmp_path):
     assert code == 1 and "FAILS" in out
     page = (tmp_path / "weak.html").read_text(encoding="utf-8")
     assert 'class="fail">FAIL' in page and "at least one check FAILS" in page
+
+
+# --------------------------------------------------------------------------- plots as vector charts
+
+def _chart_texts(fig):
+    return [op[3] for op in fig.chart.ops if op[0] == "text"]
+
+
+def test_plots_are_vector_charts_with_the_library_values(demo_report):
+    figs = [f for s in demo_report.sections for f in s.figures]
+    assert len(figs) == 10 and all(f.chart is not None and f.png == b"" for f in figs)
+    zone = figs[0]
+    texts = _chart_texts(zone)
+    # ISO 286-2:2010, Tables 2 and 3: Ø16 H7 = 0 … +18 µm, s6 (over 14 to 18 mm) = +28 … +39 µm
+    for t in ("+18", "0", "+39", "+28", "hole", "H7", "shaft", "s6"):
+        assert t in texts, t
+    assert "deviation from nominal size [µm]" in texts
+    screw = demo_report.sections[-1].figures[0]
+    assert any(t.startswith("FM,zul = ") and t.endswith(" kN") for t in _chart_texts(screw))
+
+
+def test_plot_charts_follow_the_inch_system(demo_result):
+    rep = report.build(demo_result, system="inch")
+    texts = [t for s in rep.sections for f in s.figures for t in _chart_texts(f)]
+    joined = " ".join(texts)
+    for unit in ("[thou]", "[ksi]", "[in]", "[lbf·in]", "[klbf]"):
+        assert unit in joined, unit
+    assert "µm" not in joined and "MPa" not in joined and "N·m" not in joined
+    zone = rep.sections[0].figures[0]
+    assert "+1.535" in _chart_texts(zone)  # 39 µm = 1.535 thou (1 thou = 25.4 µm exactly)
+
+
+def test_chart_text_is_searchable_in_the_pdf(pdf_pages):
+    text = "\n".join(pdf_pages)
+    assert "deviation from nominal size [µm]" in text and "radial clearance [µm]" in text
+
+
+def test_chart_svg_escapes_user_strings():
+    from fitcheck.report import chart
+
+    ch = chart.Chart('<script>alert("x")</script> & j', xlabel="x [mm]")
+    ch.add(chart.Line([0.0, 1.0], [0.0, 2.0], label="<b>l</b>"))
+    svg = chart.to_svg(chart.layout(ch))
+    assert "<script>" not in svg and "<b>" not in svg and "&lt;script&gt;" in svg
+    assert chart.to_drawing(chart.layout(ch), 200.0).width == pytest.approx(200.0)
+
+
+@settings(max_examples=150, deadline=None)
+@given(st.floats(-1e6, 1e6), st.floats(1e-6, 1e6))
+def test_nice_ticks_are_round_and_inside(lo, span):
+    from fitcheck.report.chart import nice_ticks
+
+    hi = lo + span
+    ticks, step = nice_ticks(lo, hi)
+    assert 1 <= len(ticks) <= 7
+    mant = step / 10 ** math.floor(math.log10(step))
+    assert any(math.isclose(mant, m, rel_tol=1e-9) for m in (1, 2, 2.5, 5, 10))
+    tol = 1e-9 * max(abs(lo), abs(hi), step)
+    assert all(lo - tol <= t <= hi + tol for t in ticks)
+
+
+def test_a_plot_without_chart_builder_is_still_drawn_as_png(demo_result, monkeypatch):
+    from fitcheck.report import charts
+
+    spec = "fitcheck.plots.screws:plot_joint_diagram"
+    monkeypatch.delitem(charts.BUILDERS, spec)
+    rep = report.build(demo_result)
+    screw = rep.sections[-1].figures
+    assert len(screw) == 1 and screw[0].chart is None and screw[0].png.startswith(b"\x89PNG")
+    assert report.to_html(rep).count("data:image/png;base64,") == 1
+    buf = io.BytesIO()
+    report.to_pdf(rep, buf)
+    assert buf.getvalue().startswith(b"%PDF")
+
+
+def test_charts_of_a_plastic_hub_and_an_opening_joint(demo_result):
+    import warnings
+
+    from fitcheck import screws
+    from fitcheck.pressfit import PressFitInput
+    from fitcheck.pressfit import evaluate as evaluate_pressfit
+    from fitcheck.report import chart, charts
+
+    gear = {"name": "alu gear", "interference_min": "90 um", "interference_max": "140 um",
+            "diameter": "20 mm", "length": "12 mm", "hub_outer_diameter": "30 mm",
+            "shaft_material": "C45E", "hub_material": "EN AW-6082-T6", "torque": "15 N*m",
+            "design": "elastic-plastic"}
+    cover = dict(demo_result.joints[-1].input.to_mapping(), load_eccentricity="3 mm",
+                 interface_depth="14 mm", tilting_moment="40 N*m")
+    with warnings.catch_warnings():
+        warnings.simplefilter("ignore")
+        pf = evaluate_pressfit(PressFitInput.from_mapping(gear))
+        sj = screws.evaluate(screws.ScrewJointInput.from_mapping(cover))
+    for system, mm in (("SI", "mm"), ("inch", "in")):
+        walls = chart.layout(charts.wall_stresses(pf, system))
+        assert any(op[3].startswith("plastic zone to Ø") and op[3].endswith(f"{mm} deep)")
+                   for op in walls.ops if op[0] == "text")
+        joint = chart.layout(charts.joint_diagram(sj, system))
+        assert any(op[3].startswith("opening at FAab = ") for op in joint.ops if op[0] == "text")
+        assert "<svg" in chart.to_svg(joint) and chart.to_drawing(walls, 300.0).width == 300.0

@@ -1,4 +1,8 @@
-"""Plots of a report: drawn once, in the case's unit system, kept as PNG bytes for both formats.
+"""Plots of a report: drawn once, in the case's unit system, kept for both formats.
+
+A plot with a chart builder (:mod:`fitcheck.report.charts`) is kept as a placed vector chart
+(inline SVG in the HTML, a reportlab Drawing in the PDF); any other plot function's matplotlib
+figure is kept as PNG bytes.
 
 The plot functions of :mod:`fitcheck.plots` draw in SI units. A plot function
 that takes a ``system`` argument is asked for the case's system directly; for the
@@ -19,7 +23,7 @@ from dataclasses import dataclass
 
 from ..display import num
 
-__all__ = ["Figure", "render", "to_system"]
+__all__ = ["Figure", "from_chart", "render", "to_system"]
 
 DPI = 120
 
@@ -30,10 +34,29 @@ class Figure:
     png: bytes
     width_px: int
     height_px: int
+    chart: object = None  # a placed vector chart (fitcheck.report.chart.Placed), else None
 
     @property
     def aspect(self) -> float:
         return self.height_px / self.width_px if self.width_px else 0.75
+
+    @property
+    def svg(self) -> str:
+        """Inline SVG of a vector chart ("" for a PNG plot)."""
+        if self.chart is None:
+            return ""
+        from .chart import to_svg
+
+        return to_svg(self.chart)
+
+
+def from_chart(chart, caption: str) -> Figure:
+    """A report figure of a :class:`~fitcheck.report.chart.Chart` (placed once, at its nominal size)."""
+    from .chart import SVG_SCALE, layout
+
+    placed = layout(chart)
+    return Figure(caption, b"", int(round(placed.width * SVG_SCALE)),
+                  int(round(placed.height * SVG_SCALE)), placed)
 
 
 #: SI unit as printed in a label → (inch unit printed, factor SI → inch).

@@ -1,7 +1,7 @@
 """The document model of a calculation report: every text already in words, units and the case's system.
 
 :func:`build` turns an evaluated case into a :class:`Report` whose fields are
-plain strings (and PNG bytes for the plots); the HTML template and the PDF
+plain strings (and placed vector charts or PNG bytes for the plots); the HTML template and the PDF
 layout only arrange them, so both formats say the same thing.
 
 What an engine adds later appears without a change here: inputs come from the
@@ -245,26 +245,44 @@ def _fit_figures(jr):
 
 
 def _plots(jr, eng, system: str) -> tuple[list[_figures.Figure], list[str]]:
+    """The joint's plots: vector charts where :mod:`.charts` has a builder, else matplotlib PNG."""
+    from . import charts
+
     figs, errors = [], []
     try:
-        from ..plots.fits import plot_fit
-
         fits = _fit_figures(jr)
     except ImportError:  # the limits engine is not installed: no zone diagrams
-        fits, plot_fit = [], None
+        fits = []
     except InputError as exc:
-        fits, plot_fit = [], None
+        fits = []
         errors.append(f"tolerance-zone diagram: {exc}")
     for caption, f in fits:
         try:
-            figs.append(_figures.render(plot_fit(f), caption, system))
+            figs.append(_figures.from_chart(charts.fit_chart(f, system), caption))
         except Exception as exc:  # a plot must not hide the rest of the report
             errors.append(f"{caption}: {type(exc).__name__}: {exc}")
-    for fn in eng.plot_functions():
-        caption = fn.__name__.removeprefix("plot_").replace("_", " ").capitalize()
+    specs = getattr(eng, "plots", None)
+    # a plot with a chart builder is drawn without importing its matplotlib module
+    todo = ([charts.BUILDERS.get(spec) or spec for spec in specs] if specs is not None
+            else eng.plot_functions())
+    for item in todo:
+        if isinstance(item, str):  # "module:function" of a matplotlib plot without a builder
+            mod_name, _, fn_name = item.partition(":")
+            try:
+                import importlib
+
+                item = getattr(importlib.import_module(mod_name), fn_name)
+            except (ImportError, AttributeError):  # a missing plot module is skipped
+                continue
+        name = getattr(item, "plot_name", None) or item.__name__
+        caption = name.removeprefix("plot_").replace("_", " ").capitalize()
         try:
-            fig, converted = _figures.draw(fn, jr.result, system)
-            figs.append(_figures.render(fig, caption, system, converted))
+            make = item if getattr(item, "plot_name", None) else charts.builder(item)
+            if make is not None:
+                figs.append(_figures.from_chart(make(jr.result, system), caption))
+            else:
+                fig, converted = _figures.draw(item, jr.result, system)
+                figs.append(_figures.render(fig, caption, system, converted))
         except Exception as exc:  # a plot must not hide the rest of the report
             errors.append(f"{caption}: {type(exc).__name__}: {exc}")
     return figs, errors

@@ -26,12 +26,15 @@ PASS_COLOR, FAIL_COLOR, CAUTION_COLOR = "#007755", "#bb0000", "#884400"
 @functools.cache
 def _fonts() -> str:
     """Register DejaVu Sans (regular, bold, italic) once; returns the family name."""
-    import matplotlib
+    import importlib.util
+
     from reportlab.lib.fonts import addMapping
     from reportlab.pdfbase import pdfmetrics
     from reportlab.pdfbase.ttfonts import TTFont
 
-    d = Path(matplotlib.get_data_path()) / "fonts" / "ttf"
+    # matplotlib's data folder, found without importing matplotlib
+    spec = importlib.util.find_spec("matplotlib")
+    d = Path(next(iter(spec.submodule_search_locations))) / "mpl-data" / "fonts" / "ttf"
     faces = {"": "DejaVuSans.ttf", "-Bold": "DejaVuSans-Bold.ttf",
              "-Oblique": "DejaVuSans-Oblique.ttf", "-BoldOblique": "DejaVuSans-BoldOblique.ttf"}
     for suffix, file in faces.items():
@@ -88,31 +91,97 @@ def _styles():
 
 
 def _p(text, style="cell", subs=False, color=None):
-    from reportlab.platypus import Paragraph
-
     t = _x(text, subs)
     if color:
         t = f'<font color="{color}">{t}</font>'
-    return Paragraph(t, _styles()[style])
+    return _Para(t, _styles()[style])
+
+
+@functools.cache
+def _para_class():
+    from reportlab.platypus import Paragraph
+
+    class Para(Paragraph):
+        """A paragraph that remembers its last wrap: a table wraps each cell when it measures
+        the rows, again when it draws them and again when it splits across a page."""
+
+        def wrap(self, availWidth, availHeight):
+            if getattr(self, "_wrapped_at", None) == availWidth:
+                return self.width, self.height
+            out = super().wrap(availWidth, availHeight)
+            self._wrapped_at = availWidth
+            return out
+
+        def split(self, availWidth, availHeight):
+            self._wrapped_at = None
+            return super().split(availWidth, availHeight)
+
+    return Para
+
+
+def _Para(markup, style):
+    return _para_class()(markup, style)
+
+
+class _Cell:
+    """A table cell's text before its column width is known: set as a plain string when it
+    fits on one line (cheap to measure and draw), else as a wrapping paragraph."""
+
+    __slots__ = ("text", "style", "subs", "color")
+
+    def __init__(self, text, style="cell", subs=False, color=None):
+        self.text, self.style, self.subs, self.color = str(text), style, subs, color
+
+
+_PAD = 3  # left and right padding of a table cell [pt]
+
+
+def _resolve(cell, col, row, width, cmds):
+    """A table cell as a plain string (with its style commands) or a paragraph."""
+    if not isinstance(cell, _Cell):
+        return cell
+    from reportlab.pdfbase.pdfmetrics import stringWidth
+
+    st = _styles()[cell.style]
+    text = cell.text
+    plain = "\n" not in text and not (cell.subs and _SUB.search(text))
+    if plain and stringWidth(text, st.fontName, st.fontSize) <= width - 2 * _PAD - 0.5:
+        here = ((col, row), (col, row))
+        if st.fontName != FONT:
+            cmds.append(("FONTNAME", *here, st.fontName))
+        if st.alignment == 2:
+            cmds.append(("ALIGN", *here, "RIGHT"))
+        if cell.color:
+            cmds.append(("TEXTCOLOR", *here, cell.color))
+        return text
+    return _p(text, cell.style, cell.subs, cell.color)
 
 
 def _table(head, rows, widths, row_heights=None):
-    """A ruled table of paragraphs (word-wrapped cells), header repeated on each page."""
+    """A ruled table of word-wrapped cells, header repeated on each page.
+
+    Cells given as :class:`_Cell` that fit their column on one line are set as plain strings
+    (all table cells share the font size and leading of the "cell" style)."""
     from reportlab.lib import colors
     from reportlab.platypus import Table, TableStyle
 
-    data = ([[_p(h, "head") for h in head]] if head else []) + rows
+    cell = _styles()["cell"]
+    cmds = []
+    data = ([[_Cell(h, "head") for h in head]] if head else []) + rows
+    data = [[_resolve(c, j, i, widths[j], cmds) for j, c in enumerate(r)]
+            for i, r in enumerate(data)]
     t = Table(data, colWidths=widths, repeatRows=1 if head else 0, hAlign="LEFT",
               splitByRow=1, rowHeights=row_heights)
     style = [
         ("GRID", (0, 0), (-1, -1), 0.4, colors.HexColor("#999999")),
         ("VALIGN", (0, 0), (-1, -1), "TOP"),
-        ("LEFTPADDING", (0, 0), (-1, -1), 3), ("RIGHTPADDING", (0, 0), (-1, -1), 3),
+        ("FONT", (0, 0), (-1, -1), cell.fontName, cell.fontSize, cell.leading),
+        ("LEFTPADDING", (0, 0), (-1, -1), _PAD), ("RIGHTPADDING", (0, 0), (-1, -1), _PAD),
         ("TOPPADDING", (0, 0), (-1, -1), 2), ("BOTTOMPADDING", (0, 0), (-1, -1), 3),
     ]
     if head:
         style.append(("BACKGROUND", (0, 0), (-1, 0), colors.HexColor("#e8ecf0")))
-    t.setStyle(TableStyle(style))
+    t.setStyle(TableStyle(style + cmds))
     return t
 
 
@@ -120,17 +189,14 @@ def _check_table(rows, width, with_joint):
     out = []
     for c in rows:
         color = PASS_COLOR if c.passed else FAIL_COLOR
-        name = _p(c.name)
+        name = _Cell(c.name)
         if c.note and not with_joint:
-            from reportlab.platypus import Paragraph
-
-            name = Paragraph(f"{_x(c.name)}<br/><font size='6.8' color='#444444'>"
-                             f"{_x(c.note, subs=True)}</font>",
-                             _styles()["cell"])
-        cells = [name, _p(c.value, "num"), _p(c.limit, "num"), _p(c.margin, "num"),
-                 _p(c.verdict, "cellb", color=color), _p(c.reference)]
+            name = _Para(f"{_x(c.name)}<br/><font size='6.8' color='#444444'>"
+                         f"{_x(c.note, subs=True)}</font>", _styles()["cell"])
+        cells = [name, _Cell(c.value, "num"), _Cell(c.limit, "num"), _Cell(c.margin, "num"),
+                 _Cell(c.verdict, "cellb", color=color), _Cell(c.reference)]
         if with_joint:
-            cells = [_p(c.joint), *cells]
+            cells = [_Cell(c.joint), *cells]
         out.append(cells)
     if with_joint:
         fr = [0.13, 0.23, 0.11, 0.12, 0.09, 0.07, 0.25]
@@ -142,13 +208,22 @@ def _check_table(rows, width, with_joint):
 
 
 def _image(fig, caption, width, heading=None):
+    """A plot as a flowable: a vector Drawing for a chart, else the PNG as an image."""
     from reportlab.platypus import Image, KeepTogether
 
     w_pt = min(width * 0.7, fig.width_px / 120 * 72 * 0.8)
-    h_pt = w_pt * fig.aspect
-    if h_pt > 230:
-        h_pt, w_pt = 230, 230 / fig.aspect
-    img = Image(io.BytesIO(fig.png), width=w_pt, height=h_pt)
+    if fig.chart is not None:
+        from .chart import to_drawing
+
+        w_pt = min(width * 0.72, fig.chart.width * 1.0)
+        if w_pt * fig.aspect > 230:
+            w_pt = 230 / fig.aspect
+        img = to_drawing(fig.chart, w_pt)
+    else:
+        h_pt = w_pt * fig.aspect
+        if h_pt > 230:
+            h_pt, w_pt = 230, 230 / fig.aspect
+        img = Image(io.BytesIO(fig.png), width=w_pt, height=h_pt)
     img.hAlign = "LEFT"
     return KeepTogether(([heading] if heading is not None else []) + [img, _p(caption, "caption")])
 
@@ -159,9 +234,10 @@ def _story(rep, width):
     st = _styles()
     story = [_p(f"Calculation report: {rep.doc_title}", "h1")]
     t = rep.title
-    rows = [[_p(k.capitalize(), "cellb"), _p(t.get(k, ""))]
+    rows = [[_Cell(k.capitalize(), "cellb"), _Cell(t.get(k, ""))]
             for k in ("project", "part", "revision", "author", "date")]
-    rows.append([_p("Program", "cellb"), _p(f"fitcheck {rep.version}, generated {rep.generated}")])
+    rows.append([_Cell("Program", "cellb"),
+                 _Cell(f"fitcheck {rep.version}, generated {rep.generated}")])
     story.append(_table(None, rows, [0.18 * width, 0.82 * width]))
     color = PASS_COLOR if rep.ok else FAIL_COLOR
     story.append(Spacer(1, 4))
@@ -172,7 +248,7 @@ def _story(rep, width):
     for b in rep.drawing:
         story.append(_p(b.heading + ("" if b.ok else " (a check FAILS)"), "h3"))
         if b.items:
-            rows = [[_p(i.item), _p(i.decision, "cellb"), _p(i.basis)] for i in b.items]
+            rows = [[_Cell(i.item), _Cell(i.decision, "cellb"), _Cell(i.basis)] for i in b.items]
             story.append(_table(["Item", "Decision", "Basis"], rows,
                                 [0.3 * width, 0.33 * width, 0.37 * width]))
         else:
@@ -182,7 +258,7 @@ def _story(rep, width):
 
     story.append(_p("Review and signatures", "h2"))
     story.append(_table(["Role", "Name", "Signature", "Date"],
-                        [[_p(r), _p(" "), _p(" "), _p(" ")] for r in rep.signature_roles],
+                        [[_Cell(r), _Cell(" "), _Cell(" "), _Cell(" ")] for r in rep.signature_roles],
                         [0.22 * width, 0.31 * width, 0.31 * width, 0.16 * width],
                         [None] + [26] * len(rep.signature_roles)))
     story.append(Paragraph(f'<font color="{CAUTION_COLOR}"><b>Caution.</b></font> '
@@ -194,7 +270,7 @@ def _story(rep, width):
     story.append(_p("Shared conditions", "h2"))
     if rep.conditions:
         story.append(_table(["Condition", "Value"],
-                            [[_p(c.name, subs=True), _p(c.value)] for c in rep.conditions],
+                            [[_Cell(c.name, subs=True), _Cell(c.value)] for c in rep.conditions],
                             [0.5 * width, 0.5 * width]))
     else:
         story.append(_p("None given; each joint states its own.", "body"))
@@ -203,13 +279,13 @@ def _story(rep, width):
         story.append(_p(f"{s.number}. {s.heading}", "h2"))
         story.append(_p("Inputs", "h3"))
         story.append(_table(["Input", "Value", "From"],
-                            [[_p(i.name, subs=True), _p(i.value), _p(i.source, "small")]
+                            [[_Cell(i.name, subs=True), _Cell(i.value), _Cell(i.source, "small")]
                              for i in s.inputs],
                             [0.42 * width, 0.42 * width, 0.16 * width]))
         if s.method:
             story.append(_p("Method", "h3"))
             story.append(_table(["#", "Step", "Standard clause / equation"],
-                                [[_p(str(n)), _p(step, subs=True), _p(ref)]
+                                [[_Cell(str(n)), _Cell(step, subs=True), _Cell(ref)]
                                  for n, (step, ref) in enumerate(s.method, 1)],
                                 [0.05 * width, 0.6 * width, 0.35 * width]))
         story.append(_p("Results", "h3"))
@@ -238,6 +314,11 @@ def _numbered_canvas(footer_title: str, caution: str):
     from reportlab.pdfgen import canvas
     from reportlab.platypus import Paragraph
 
+    @functools.cache
+    def footer_text(width):  # the caution is laid out once and drawn on every page
+        p = Paragraph(f"<b>Caution.</b> {_x(caution)}", _styles()["footer"])
+        return p, p.wrap(width, 20 * mm)[1]
+
     class NumberedCanvas(canvas.Canvas):
         """Draws the running footer with "page n of N" once the page count is known."""
 
@@ -263,8 +344,7 @@ def _numbered_canvas(footer_title: str, caution: str):
             self.setStrokeColorRGB(0.6, 0.6, 0.6)
             self.setLineWidth(0.4)
             self.line(16 * mm, 23 * mm, w - 16 * mm, 23 * mm)
-            p = Paragraph(f"<b>Caution.</b> {_x(caution)}", _styles()["footer"])
-            _, h = p.wrap(w - 32 * mm, 20 * mm)
+            p, h = footer_text(w - 32 * mm)
             p.drawOn(self, 16 * mm, 22 * mm - h)
             self.setFont(FONT, 7)
             self.setFillColorRGB(0.3, 0.3, 0.3)
