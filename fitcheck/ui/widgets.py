@@ -4,13 +4,16 @@ from __future__ import annotations
 
 import re
 from collections.abc import Iterable, Mapping, Sequence
+from typing import TYPE_CHECKING
 
-import pandas as pd
 import streamlit as st
 
 import fitcheck
 from fitcheck.errors import InputError
 from fitcheck.ui import state, unitsys
+
+if TYPE_CHECKING:  # pandas is imported where a table is made: the first result shows sooner
+    import pandas as pd
 
 PASS, FAIL = "✔ holds", "✘ FAILS"
 SENSE = {">=": "≥", "<=": "≤"}
@@ -218,6 +221,8 @@ def checks_table(checks: Iterable, system: str, joint_of=None) -> pd.DataFrame:
     ``checks`` are :class:`fitcheck.checks.Check` objects or ``fitcheck.case.CaseCheck``
     (then a joint column is added).
     """
+    import pandas as pd
+
     rows = []
     for c in checks:
         chk = getattr(c, "check", c)
@@ -325,5 +330,7 @@ def warnings_box(messages: Iterable[str]) -> None:
 
 
 def kv_table(rows: Mapping[str, str] | Sequence[tuple[str, str]], key: str | None = None) -> None:
+    import pandas as pd
+
     items = list(rows.items()) if isinstance(rows, Mapping) else list(rows)
     static_table(pd.DataFrame(items, columns=["quantity", "value"]), key=key)
