@@ -41,7 +41,8 @@ __all__ = [
     "nominal_stresses", "press_fit_seat", "validity",
 ]
 
-#: Reference diameter of the tabulated notch factors of press fits [mm] (DIN 743-2:2012) — from memory
+#: Reference diameter of the tabulated notch factors of press fits [mm] (DIN 743-2:2012); the tests
+#: behind them used D_F = 40 mm joints: FKM report 325 (2015, project 294 II), abstract
 D_BK = 40.0
 #: DIN 743-3:2012 ratios of the fatigue strengths to σ_B(d_B) for steels (from memory)
 RATIO_SIGMA_ZDW = 0.4
@@ -233,7 +234,10 @@ def roughness_factors(rz_um, sigma_B_d):
     .. math:: K_{F\sigma} = 1 - 0.22\,\lg(R_z/\mu\mathrm{m})\,\left(\lg\frac{\sigma_B(d)}{20\ \mathrm{MPa}} - 1\right),
               \qquad K_{F\tau} = 0.575\,K_{F\sigma} + 0.425
 
-    (from memory.)
+    (DIN 743 form from memory.) K_Fσ is the same function as the FKM guideline's roughness
+    factor K_R,σ = 1 − a_R,σ·lg Rz·lg(2·R_m/R_m,N,min) with the published steel constants
+    a_R,σ = 0.22, R_m,N,min = 400 MPa (FKM guideline, Analytical strength assessment); checked in
+    tests/validation/test_din743_published.py.
 
     Examples
     --------
@@ -419,8 +423,9 @@ def validity(d, sigma_B_dB, temperature=20.0):
 
     Returns a dict of boolean arrays: ``diameter`` (notch-factor size conversion defined
     from 7.5 to 150 mm), ``strength`` (press-fit notch factors from tests on steels of
-    σ_B about 400 … 1200 MPa), ``temperature`` (DIN 743-1 scope about −40 … +150 °C) —
-    all bounds from memory.
+    σ_B about 400 … 1200 MPa) — both from memory — and ``temperature`` (DIN 743 scope
+    −40 … +150 °C, as stated for DIN 743:2000 in lecture notes "Maschinenelemente — Wellen",
+    Festigkeitsnachweis, inggo.com teachnet; unchanged in 2012 — from memory).
 
     >>> {k: bool(v) for k, v in validity(20.0, 700.0).items()}
     {'diameter': False, 'strength': False, 'temperature': False}
