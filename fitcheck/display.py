@@ -207,6 +207,31 @@ def show_small(value_mm: float, system: str, digits: int | None = None) -> str:
     return f"{num(mag, d)} {symbol(target)}"
 
 
+_SUPERSCRIPT = str.maketrans("0123456789-", "⁰¹²³⁴⁵⁶⁷⁸⁹⁻")
+
+
+def probability(x: float, digits: int = 3) -> str:
+    """A probability for people: plain notation down to 0.0001, smaller ones as "m × 10⁻ⁿ".
+
+    Never e-notation and never "-0"; ``digits`` significant digits; NaN reads "n/a".
+
+    >>> probability(0.0123), probability(2.634e-15), probability(0.0), probability(1e-4)
+    ('0.0123', '2.63 × 10⁻¹⁵', '0', '0.0001')
+    >>> probability(9.996e-5), probability(float("nan"))
+    ('1 × 10⁻⁴', 'n/a')
+    """
+    x = float(x)
+    if x != x:
+        return "n/a"
+    if x == 0 or not math.isfinite(x) or abs(x) >= 1e-4:
+        return num(x, digits)
+    e = math.floor(math.log10(abs(x)))
+    m = round(x / 10.0 ** e, digits - 1)
+    if abs(m) >= 10:
+        m, e = m / 10.0, e + 1
+    return f"{num(m, digits)} × 10{str(e).translate(_SUPERSCRIPT)}"
+
+
 def margin_text(m: float | None, loaded: bool = True) -> str:
     """A check's relative margin as people read it.
 

@@ -14,7 +14,8 @@ Admitted set (default)
 * shaft basis: shafts h5, h6, h7 with every hole letter at IT6, IT7, IT8;
 
 each only where ISO 286-2 defines the class at the size; a fit reached from
-both bases (H7/h6) is listed once.
+both bases (H7/h6) is listed once. ``shaft_letters`` and ``hole_letters`` narrow the
+mating classes to some deviation letters (e.g. only the interference letters p … u).
 
 Ranking
 -------
@@ -71,6 +72,34 @@ def _grade(cls: str) -> int:
     return int(m.group(2)) if m else -99
 
 
+def _letter(cls: str) -> str:
+    m = _CLASS_RE.match(cls)
+    return m.group(1) if m else ""
+
+
+def _letters(name: str, seq, feature: str) -> tuple[str, ...] | None:
+    """Admitted deviation letters of the mating ``feature`` ("shaft" or "hole"); ``None`` = every one.
+
+    Letters are read in the case of the feature (shafts lower case, holes upper case), so
+    ``("P", "s")`` given as hole letters means P and S; a letter ISO 286 does not know is refused.
+
+    >>> _letters("shaft_letters", ["p", "R", "p"], "shaft")
+    ('p', 'r')
+    """
+    if seq is None:
+        return None
+    from .core import iso286
+
+    known = iso286.all_letters(feature)
+    out = []
+    for x in _admitted(name, seq, "letter"):
+        t = x.strip().lower() if feature == "shaft" else x.strip().upper()
+        if t not in known:
+            raise InputError(name, x, f"ISO 286 {feature} letters: {', '.join(known)}")
+        out.append(t)
+    return tuple(dict.fromkeys(out))
+
+
 #: Most items of one admitted list (letters, classes or grades) of a search.
 MAX_ADMITTED = 100
 _ADMITTED = {
@@ -106,7 +135,8 @@ def _admitted(name: str, seq, kind: str) -> tuple:
 
 
 def candidates(nominal_mm: float, holes=DEFAULT_HOLES, shaft_grades=DEFAULT_SHAFT_GRADES,
-               shafts=DEFAULT_SHAFTS, hole_grades=DEFAULT_HOLE_GRADES) -> list[tuple[str, str, str]]:
+               shafts=DEFAULT_SHAFTS, hole_grades=DEFAULT_HOLE_GRADES, shaft_letters=None,
+               hole_letters=None) -> list[tuple[str, str, str]]:
     """The admitted (hole, shaft, basis) combinations ISO 286 defines at ``nominal_mm``.
 
     Parameters
@@ -121,6 +151,10 @@ def candidates(nominal_mm: float, holes=DEFAULT_HOLES, shaft_grades=DEFAULT_SHAF
         Basis shafts of the shaft-basis set (``h5``, ``h6``, ``h7``).
     hole_grades : sequence of int
         Grades of the mating holes (every letter) in the shaft-basis set.
+    shaft_letters : sequence of str or None
+        Deviation letters of the mating shafts in the hole-basis set (``None``: every letter).
+    hole_letters : sequence of str or None
+        Deviation letters of the mating holes in the shaft-basis set (``None``: every letter).
 
     Returns
     -------
@@ -132,6 +166,9 @@ def candidates(nominal_mm: float, holes=DEFAULT_HOLES, shaft_grades=DEFAULT_SHAF
     >>> c = candidates(20.0)
     >>> ("H7", "s6", "hole") in c, ("S7", "h6", "shaft") in c, ("H7", "h6", "hole+shaft") in c
     (True, True, True)
+    >>> sorted({s for _, s, b in candidates(20.0, holes=("H7",), shafts=(),
+    ...         shaft_letters=("p", "s"), shaft_grades=(6,))})
+    ['p6', 's6']
     """
     d = float(nominal_mm)
     shaft_ok = fits.valid_classes(d, "shaft")
@@ -141,13 +178,13 @@ def candidates(nominal_mm: float, holes=DEFAULT_HOLES, shaft_grades=DEFAULT_SHAF
         if h not in hole_ok:
             continue
         for s in shaft_ok:
-            if _grade(s) in shaft_grades:
+            if _grade(s) in shaft_grades and (shaft_letters is None or _letter(s) in shaft_letters):
                 out[(h, s)] = "hole"
     for s in shafts:
         if s not in shaft_ok:
             continue
         for h in hole_ok:
-            if _grade(h) in hole_grades:
+            if _grade(h) in hole_grades and (hole_letters is None or _letter(h) in hole_letters):
                 out[(h, s)] = "hole+shaft" if out.get((h, s)) == "hole" else "shaft"
     return [(h, s, b) for (h, s), b in out.items()]
 
@@ -269,7 +306,7 @@ def _checks_for(i: int, r: dict, a: dict, shrink: bool, press_limit_given: bool)
 
 def search_fits(joint, *, holes=DEFAULT_HOLES, shaft_grades=DEFAULT_SHAFT_GRADES,
                 shafts=DEFAULT_SHAFTS, hole_grades=DEFAULT_HOLE_GRADES,
-                systems=("iso",)) -> SearchResult:
+                systems=("iso",), shaft_letters=None, hole_letters=None) -> SearchResult:
     """Evaluate every admitted fit for a press-fit joint and rank those that pass.
 
     Parameters
@@ -279,6 +316,9 @@ def search_fits(joint, *, holes=DEFAULT_HOLES, shaft_grades=DEFAULT_SHAFT_GRADES
         the nominal size.
     holes, shaft_grades, shafts, hole_grades
         The admitted set (see :func:`candidates`).
+    shaft_letters, hole_letters : sequence of str or None
+        Deviation letters of the mating shafts (hole basis) and holes (shaft basis); ``None``
+        (default) admits every letter ISO 286 defines at the size. Read in the feature's case.
     systems : tuple of {"iso", "ansi"}
         Search the ISO 286 fits of the admitted set, the ASME B4.1 classes of fit tabulated at
         the size (RC, LC, LT, LN, FN; basis ``"ANSI B4.1"``, fit written ``"1 in FN2"``), or both.
@@ -313,6 +353,8 @@ def search_fits(joint, *, holes=DEFAULT_HOLES, shaft_grades=DEFAULT_SHAFT_GRADES
     holes, shafts = _admitted("holes", holes, "class"), _admitted("shafts", shafts, "class")
     shaft_grades = _admitted("shaft_grades", shaft_grades, "grade")
     hole_grades = _admitted("hole_grades", hole_grades, "grade")
+    shaft_letters = _letters("shaft_letters", shaft_letters, "shaft")
+    hole_letters = _letters("hole_letters", hole_letters, "hole")
     for name, seq in (("holes", holes), ("shafts", shafts)):
         for c in seq:
             if not isinstance(c, str) or not _CLASS_RE.match(c.strip()):
@@ -324,7 +366,8 @@ def search_fits(joint, *, holes=DEFAULT_HOLES, shaft_grades=DEFAULT_SHAFT_GRADES
     systems = (systems,) if isinstance(systems, str) else tuple(systems)
     if not systems or any(x not in ("iso", "ansi") for x in systems):
         raise InputError("systems", list(systems), "'iso', 'ansi' or both")
-    cands = candidates(d, holes, shaft_grades, shafts, hole_grades) if "iso" in systems else []
+    cands = candidates(d, holes, shaft_grades, shafts, hole_grades, shaft_letters,
+                       hole_letters) if "iso" in systems else []
     ansi = fits.ansi_classes(d) if "ansi" in systems and d / 25.4 <= 19.69 else []
     if not cands and not ansi:
         raise InputError("admitted set", f"{list(holes)} / {list(shafts)}",
@@ -408,8 +451,16 @@ def search_fits(joint, *, holes=DEFAULT_HOLES, shaft_grades=DEFAULT_SHAFT_GRADES
                         rejected=tuple(rejected_all),
                         admitted={"holes": tuple(holes), "shaft_grades": tuple(shaft_grades),
                                   "shafts": tuple(shafts), "hole_grades": tuple(hole_grades),
+                                  "shaft_letters": _all_if_none(shaft_letters, "shaft"),
+                                  "hole_letters": _all_if_none(hole_letters, "hole"),
                                   "systems": systems},
                         notes=tuple(notes))
+
+
+def _all_if_none(letters, feature: str) -> tuple[str, ...]:
+    from .core import iso286
+
+    return iso286.all_letters(feature) if letters is None else tuple(letters)
 
 
 def _ranked(c: Candidate, rank: int) -> Candidate:

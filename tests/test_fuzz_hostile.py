@@ -11,6 +11,7 @@ that comes out holds no NaN, and no negative capacity, pressure or stiffness.
 
 from __future__ import annotations
 
+import contextlib
 import dataclasses
 import math
 import os
@@ -241,7 +242,9 @@ def test_command_line(data, cli, tmp_path_factory):
             argv += [opt, v]
     if cmd in ("study",):
         argv += ["--samples", "200"]
-    code, out, err = cli(*argv)
+    # relative output paths (``demo -o 0``, ``report -o x``) land in a scratch folder, never in the checkout
+    with contextlib.chdir(tmp_path_factory.getbasetemp()):
+        code, out, err = cli(*argv)
     assert code in (0, 1, 2), (argv, code, err[-2000:])
     assert "Traceback" not in err, (argv, err[-2000:])
     if code == 2:

@@ -38,6 +38,12 @@ def add_arguments(p) -> None:
                    help="basis shafts of the shaft-basis set (default h5,h6,h7)")
     p.add_argument("--hole-grades", default="6,7,8", metavar="LIST",
                    help="grades of the holes mated with them (default 6,7,8)")
+    p.add_argument("--shaft-letters", default="", metavar="LIST",
+                   help="deviation letters of the shafts mated with the basis holes, e.g. "
+                        "'p,r,s' (default: every letter)")
+    p.add_argument("--hole-letters", default="", metavar="LIST",
+                   help="deviation letters of the holes mated with the basis shafts, e.g. "
+                        "'P,R,S' (default: every letter)")
     p.add_argument("--fits", type=str.lower, choices=("iso", "ansi", "both"), default="iso",
                    help="which fits to search: the ISO 286 admitted set (default), the ASME B4.1 "
                         "classes (RC, LC, LT, LN, FN) tabulated at the size, or both")
@@ -48,6 +54,12 @@ def add_arguments(p) -> None:
 def _classes(text: str, option: str) -> tuple[str, ...]:
     items = tuple(t.strip() for t in str(text).split(",") if t.strip())
     return items
+
+
+def _letter_list(text: str) -> tuple[str, ...] | None:
+    """Letters separated by commas; empty text = every letter (``None``)."""
+    items = _classes(text, "")
+    return items or None
 
 
 def _grades(text: str, option: str) -> tuple[int, ...]:
@@ -79,8 +91,10 @@ def print_search(r, k: int, current: str | None = None, out=None) -> None:
     out.write(f"{head}\n{'=' * len(head)}\n")
     a = r.admitted
     systems = a.get("systems", ("iso",))
-    iso = (f"holes {', '.join(a['holes'])} with shafts IT{'/'.join(map(str, a['shaft_grades']))}; "
-           f"shafts {', '.join(a['shafts'])} with holes IT{'/'.join(map(str, a['hole_grades']))}")
+    iso = (f"holes {', '.join(a['holes'])} with shafts{_of(a, 'shaft')} "
+           f"IT{'/'.join(map(str, a['shaft_grades']))}; "
+           f"shafts {', '.join(a['shafts'])} with holes{_of(a, 'hole')} "
+           f"IT{'/'.join(map(str, a['hole_grades']))}")
     admitted = "; ".join(([iso] if "iso" in systems else [])
                          + (["ASME B4.1 classes RC, LC, LT, LN, FN tabulated at the size"]
                             if "ansi" in systems else []))
@@ -120,6 +134,14 @@ def print_search(r, k: int, current: str | None = None, out=None) -> None:
     out.write(f"\nCaution: {CAUTION}\n")
 
 
+def _of(admitted: dict, feature: str) -> str:
+    """' p, r, s' when the search admitted only some letters of ``feature``, else ''."""
+    from ..core import iso286
+
+    letters = tuple(admitted.get(f"{feature}_letters", ()))
+    return "" if not letters or letters == iso286.all_letters(feature) else f" {', '.join(letters)}"
+
+
 def run(args) -> int:
     from ..search import search_fits
 
@@ -131,6 +153,8 @@ def run(args) -> int:
                     shaft_grades=_grades(args.shaft_grades, "--shaft-grades"),
                     shafts=_classes(args.shafts, "--shafts"),
                     hole_grades=_grades(args.hole_grades, "--hole-grades"),
+                    shaft_letters=_letter_list(getattr(args, "shaft_letters", "")),
+                    hole_letters=_letter_list(getattr(args, "hole_letters", "")),
                     systems={"iso": ("iso",), "ansi": ("ansi",), "both": ("iso", "ansi")}[
                         getattr(args, "fits", "iso")])
     if args.plot:

@@ -41,6 +41,9 @@ __all__ = [
     "nominal_stresses", "press_fit_seat", "validity",
 ]
 
+#: Joints per block of work in :func:`press_fit_seat` (arrays of 125 kB: they stay in the CPU
+#: caches and below the C library's threshold for mapping fresh memory)
+CHUNK = 16000
 #: Reference diameter of the tabulated notch factors of press fits [mm] (DIN 743-2:2012); the tests
 #: behind them used D_F = 40 mm joints: FKM report 325 (2015, project 294 II), abstract
 D_BK = 40.0
@@ -500,6 +503,37 @@ def press_fit_seat(*, d, di=0.0, sigma_B_dB, sigma_S_dB, sigma_zdW_dB=None, sigm
     ----------
     DIN 743-1/-2/-3:2012 (see the module docstring) — from memory.
     """
+    kw = dict(d=d, di=di, sigma_B_dB=sigma_B_dB, sigma_S_dB=sigma_S_dB, sigma_zdW_dB=sigma_zdW_dB,
+              sigma_bW_dB=sigma_bW_dB, tau_tW_dB=tau_tW_dB, d_B=d_B, d_eff=d_eff, rz_um=rz_um, k_v=k_v,
+              moment_amplitude=moment_amplitude, torque_mean=torque_mean,
+              torque_amplitude=torque_amplitude, axial_mean=axial_mean, moment_max=moment_max,
+              torque_max=torque_max, axial_max=axial_max)
+    shapes = {np.shape(v) for v in kw.values() if v is not None and np.ndim(v) > 0}
+    if len(shapes) != 1 or np.prod(next(iter(shapes))) <= 2 * CHUNK:
+        return _seat(group=group, mean_stress_case=mean_stress_case, **kw)
+    # Long arrays (all of one shape) in cache-sized blocks: the same elementwise arithmetic, so
+    # the same numbers, without whole-array temporaries spilling out of the CPU caches.
+    shape = next(iter(shapes))
+    n = int(np.prod(shape))
+    flat = {k: (np.asarray(v, dtype=float).reshape(-1) if v is not None and np.ndim(v) > 0 else v)
+            for k, v in kw.items()}
+    out: dict = {}
+    for start in range(0, n, CHUNK):
+        sl = slice(start, min(start + CHUNK, n))
+        part = _seat(group=group, mean_stress_case=mean_stress_case,
+                     **{k: (v[sl] if isinstance(v, np.ndarray) else v) for k, v in flat.items()})
+        if not out:
+            out = {k: (np.empty(n, dtype=np.asarray(v).dtype) if np.ndim(v) else v) for k, v in part.items()}
+        for k, v in part.items():
+            if np.ndim(v):
+                out[k][sl] = v
+    return {k: (v.reshape(shape) if np.ndim(v) else v) for k, v in out.items()}
+
+
+def _seat(*, d, di, sigma_B_dB, sigma_S_dB, sigma_zdW_dB, sigma_bW_dB, tau_tW_dB, group, d_B, d_eff,
+          rz_um, k_v, moment_amplitude, torque_mean, torque_amplitude, axial_mean, moment_max,
+          torque_max, axial_max, mean_stress_case):
+    """The chain of :func:`press_fit_seat` on one block of joints (every argument given)."""
     # The same equations as the step functions above, with every logarithm taken once
     # (lg d, lg σ_B(d), lg Rz): the chain runs on 10⁶-long arrays in a tolerance study.
     d = np.asarray(d, dtype=float)

@@ -89,7 +89,8 @@ import numpy as np
 __all__ = [
     "KAPPA_DIN", "KAPPA_TRESCA", "NEWTON_STEPS",
     "elastic_limit_pressure", "full_plastic_pressure", "pressure_at_zone",
-    "interference_at_zone", "plastic_zone_diameter", "contact_pressure", "state_pressures",
+    "interference_at_zone", "plastic_zone_diameter", "contact_pressure", "peak_pressure",
+    "state_pressures",
     "hub_stresses", "plastic_share",
 ]
 
@@ -352,6 +353,27 @@ def contact_pressure(delta, d, di, Do, Es, nus, Eh, nuh, Reh, kappa=KAPPA_DIN):
     """
     Dpl = plastic_zone_diameter(delta, d, di, Do, Es, nus, Eh, nuh, Reh, kappa)
     return _out(_pressure(delta, Dpl, d, di, Do, Es, nus, Eh, nuh, Reh, kappa))
+
+
+def peak_pressure(delta, d, di, Do, Es, nus, Eh, nuh, Reh, kappa=KAPPA_DIN):
+    r"""Pressure and plastic zone diameter at a first loading to ``delta`` (one solution).
+
+    The same numbers as :func:`contact_pressure` and :func:`plastic_zone_diameter`, with the
+    iterative solution run once for both.
+
+    Returns
+    -------
+    (p, Dpl) : tuple
+        Contact pressure [MPa] and plastic zone diameter [mm].
+
+    Examples
+    --------
+    >>> p, dpl = peak_pressure(0.100, 20.0, 0.0, 40.0, 210000, 0.3, 70000, 0.33, 300.0)
+    >>> round(p, 2), round(dpl, 3)
+    (153.17, 21.94)
+    """
+    Dpl = plastic_zone_diameter(delta, d, di, Do, Es, nus, Eh, nuh, Reh, kappa)
+    return _out(_pressure(delta, Dpl, d, di, Do, Es, nus, Eh, nuh, Reh, kappa)), _out(Dpl)
 
 
 def _pressure(delta, Dpl, d, di, Do, Es, nus, Eh, nuh, Reh, kappa):

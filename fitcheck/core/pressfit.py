@@ -103,7 +103,8 @@ from . import elastoplastic as _ep
 
 __all__ = ["evaluate", "OUTPUT_KEYS"]
 
-CHUNK = 1 << 16  # joints per block of work (fits the CPU caches)
+CHUNK = 16000  # joints per block: arrays of 125 kB stay in the CPU caches and below the C
+#                library's threshold for mapping fresh memory (no page faults per temporary)
 
 OUTPUT_KEYS = (
     "delta_eff_min_op", "delta_eff_max_op", "delta_eff_min_asm", "delta_eff_max_asm",
@@ -220,6 +221,64 @@ def _pick(cur, new, cur_state, code, *, smaller):
     return np.where(better, code, cur_state), np.where(better, new, cur)
 
 
+def _o(a, *others):
+    """``a`` as the ``out=`` of an operation on ``a`` and ``others`` when it is an array of the
+    result's shape, else None (a new result)."""
+    if isinstance(a, np.ndarray) and a.flags.writeable and a.shape == np.broadcast(a, *others).shape:
+        return a
+    return None
+
+
+def _own(x):
+    """A writable float64 (or int) array of its own holding ``x`` (for in-place updates)."""
+    return np.array(x, copy=True)
+
+
+def _fits(cur, better, new):
+    """True when ``cur`` can take ``new`` where ``better`` in place (no broadcasting beyond it)."""
+    return (isinstance(cur, np.ndarray) and cur.flags.writeable
+            and np.broadcast(cur, better, new).shape == cur.shape)
+
+
+def _pick_into(cur, new, cur_state, code, *, smaller):
+    """:func:`_pick` updating ``cur`` and ``cur_state`` in place where the shapes allow."""
+    if cur is None:
+        return np.full(np.shape(new), code), _own(new)
+    better = np.less(new, cur) if smaller else np.greater(new, cur)
+    if _fits(cur, better, new) and _fits(cur_state, better, code):
+        np.copyto(cur, new, where=better)
+        np.copyto(cur_state, code, where=better)
+        return cur_state, cur
+    return np.where(better, code, cur_state), np.where(better, new, cur)
+
+
+def _running_max(values):
+    """Elementwise maximum of a list of arrays (as ``np.maximum.reduce``, without stacking them)."""
+    out = np.maximum(values[0], values[1]) if len(values) > 1 else np.array(values[0], dtype=np.float64)
+    for v in values[2:]:
+        out = np.maximum(out, v, out=_o(out, v))
+    return out
+
+
+def _first_loading(delta, peak, p_peak, ep_args):
+    """Elastic-plastic pressure at the first loading to ``delta`` (:func:`elastoplastic.contact_pressure`).
+
+    Where ``delta`` is the peak interference the peak pressure is that value already; the
+    iterative solution runs only on the joints where ``delta`` lies below the peak.
+    """
+    below = delta != peak
+    if not np.any(below):
+        return p_peak
+    shape = np.shape(below)
+    if np.ndim(below) != 1 or np.shape(p_peak) != shape or not all(
+            np.ndim(a) == 0 or np.shape(a) == shape for a in (delta, *ep_args)):
+        return _ep.contact_pressure(delta, *ep_args)
+    out = np.array(p_peak, dtype=np.float64)
+    sub = [a[below] if np.ndim(a) else a for a in (delta, *ep_args)]
+    out[below] = _ep.contact_pressure(*sub)
+    return out
+
+
 def _block(*, interference_min, interference_max, d, L, di, Do, Es, nus, alphas, Rps, rhos,
            Eh, nuh, alphah, Rph, rhoh, mu_slip, mu_press, rz_shaft, rz_hub, smoothing,
            torque, axial_force, slip_safety, omega, T_shaft, T_hub, T_assembly,
@@ -293,10 +352,10 @@ def _block(*, interference_min, interference_max, d, L, di, Do, Es, nus, alphas,
     if plastic:  # partly plastic hub, DIN 7190-1:2017 (core/elastoplastic.py): the hub yields at the
         # largest interference over every state and unloads elastically to each other state
         ep_args = (d, di, Do, Es, nus, Eh, nuh, Rph)
-        peak_lo = np.maximum.reduce([s[3] for s in states])
-        peak_hi = np.maximum.reduce([s[4] for s in states])
-        _n, p_pk_lo, _m, _dl = _ep.state_pressures(peak_lo, peak_lo, *ep_args, first=False)
-        _n, p_pk_hi, _m, d_pl = _ep.state_pressures(peak_hi, peak_hi, *ep_args, first=False)
+        peak_lo = _running_max([s[3] for s in states])
+        peak_hi = _running_max([s[4] for s in states])
+        p_pk_lo, _dl = _ep.peak_pressure(peak_lo, *ep_args)
+        p_pk_hi, d_pl = _ep.peak_pressure(peak_hi, *ep_args)
         set_lo = np.maximum(peak_lo - p_pk_lo / c_p, 0.0)   # permanent set of the yielded bore
         k_h = _ep.KAPPA_DIN * Rph
         p_el = _ep.elastic_limit_pressure(d, Do, Rph)
@@ -307,7 +366,7 @@ def _block(*, interference_min, interference_max, d, L, di, Do, Es, nus, alphas,
         d_pl = d
         set_lo = 0.0
 
-    p_lo = p_hi = hub_eq = hub_sr = hub_st = shaft_eq = shaft_tr = w_loose = None
+    p_lo = p_hi = hub_eq = hub_p = hub_st = shaft_eq = shaft_tr = w_loose = None
     p_lo_state = p_hi_state = hub_state = shaft_state = loose_state = None
     p_min_op = p_max_op = de_min_op = de_max_op = None
     for k, de_min_th in enumerate(de_min_ths):
@@ -317,50 +376,87 @@ def _block(*, interference_min, interference_max, d, L, di, Do, Es, nus, alphas,
         wl = np.where(c_rot > 0.0, wl, np.where(de_free > 0.0, np.inf, 0.0))
         wl = np.where(np.isnan(wl), 0.0, wl)   # Do = inf: an infinite hub cannot turn
         loose_state, w_loose = _pick(w_loose, wl, loose_state, 2 * k, smaller=True)
+    brittle_s = np.any(brittle_shaft)
+    # The state loop works in place (out=, copyto) on a few arrays per state: the same
+    # arithmetic, operation for operation, as the textbook form in the comments, so every
+    # result is bit for bit that of the plain expressions.
     for code, k, moving, de_lo, de_hi in states:
         if plastic:
             p_l = press(de_lo, peak_lo, p_pk_lo)
             p_h = press(de_hi, peak_hi, p_pk_hi)
-        else:
-            p_l = np.maximum(de_lo * c_p, 0.0)
-            p_h = np.maximum(de_hi * c_p, 0.0)
+        else:                                 # p = max(δ·c_p, 0)
+            p_l = np.multiply(de_lo, c_p)
+            p_l = np.maximum(p_l, 0.0, out=_o(p_l))
+            p_h = np.multiply(de_hi, c_p)
+            p_h = np.maximum(p_h, 0.0, out=_o(p_h))
         if k == 1 and moving:
             de_min_op, de_max_op, p_min_op, p_max_op = de_lo, de_hi, p_l, p_h
-        p_lo_state, p_lo = _pick(p_lo, p_l, p_lo_state, code, smaller=True)
-        p_hi_state, p_hi = _pick(p_hi, p_h, p_hi_state, code, smaller=False)
-        # hub bore at the tightest interference of this state
-        sr = -p_h
-        st_p = np.where(p_h > p_el, k_h - p_h, p_h * th) if plastic else p_h * th
-        st = st_p + (rot_hub_bore if moving else 0.0)
-        vm = np.sqrt(sr * sr + st * st - sr * st)
+        p_lo_state, p_lo = _pick_into(p_lo, p_l, p_lo_state, code, smaller=True)
+        p_hi_state, p_hi = _pick_into(p_hi, p_h, p_hi_state, code, smaller=False)
+        # hub bore at the tightest interference of this state: sr = −p, st = p·th (+ rotation);
+        # von Mises √(sr² + st² − sr·st) = √(p² + st² + p·st) exactly (sign changes are exact)
+        if plastic:
+            st = np.where(p_h > p_el, k_h - p_h, p_h * th)
+        else:
+            st = np.multiply(p_h, th)
+        rot = rot_hub_bore if moving else 0.0
+        st = np.add(st, rot, out=_o(st, rot))
+        pp = np.multiply(p_h, p_h)
+        vm = np.multiply(st, st)
+        vm = np.add(pp, vm, out=_o(vm, pp))
+        tmp = np.multiply(p_h, st)
+        vm = np.add(vm, tmp, out=_o(vm, tmp))
+        vm = np.sqrt(vm, out=_o(vm))
         eq = np.where(brittle_hub, st, vm) if brittle_h else vm
         if hub_eq is None:
-            hub_eq, hub_sr, hub_st, hub_state = eq, sr, st, np.full(np.shape(eq), code)
+            hub_eq, hub_p, hub_st = _own(eq), _own(p_h), _own(st)
+            hub_state = np.full(np.shape(eq), code)
         else:
-            better = eq > hub_eq
-            hub_eq, hub_sr, hub_st = (np.where(better, eq, hub_eq), np.where(better, sr, hub_sr),
-                                      np.where(better, st, hub_st))
-            hub_state = np.where(better, code, hub_state)
-        # shaft: inner point (bore or centre; sigma_r = 0 or = sigma_t) and surface
-        st_in = (rot_sh_in if moving else 0.0) - p_h * g_in
-        st_s = (rot_sh_surf if moving else 0.0) - p_h * ts_f
-        sr_s = -p_h
-        vm_s = np.sqrt(sr_s * sr_s + st_s * st_s - sr_s * st_s)
-        s_vm = np.maximum(np.abs(st_in), vm_s)
-        tr_s = np.maximum(np.maximum(np.abs(st_s - sr_s), np.abs(st_s)), p_h)
-        s_tr = np.maximum(np.abs(st_in), tr_s)
-        if np.any(brittle_shaft):
+            better = np.greater(eq, hub_eq)
+            if _fits(hub_eq, better, eq) and _fits(hub_p, better, p_h) and _fits(hub_st, better, st):
+                np.copyto(hub_eq, eq, where=better)
+                np.copyto(hub_p, p_h, where=better)
+                np.copyto(hub_st, st, where=better)
+                np.copyto(hub_state, code, where=better)
+            else:
+                hub_eq, hub_p, hub_st = (np.where(better, eq, hub_eq), np.where(better, p_h, hub_p),
+                                         np.where(better, st, hub_st))
+                hub_state = np.where(better, code, hub_state)
+        # shaft: inner point (bore or centre; sigma_r = 0 or = sigma_t) and surface, sr_s = −p;
+        # von Mises √(p² + st_s² + p·st_s), Tresca max(|st_s + p|, |st_s|, p)
+        st_in = np.subtract(rot_sh_in if moving else 0.0, np.multiply(p_h, g_in))
+        st_s = np.subtract(rot_sh_surf if moving else 0.0, np.multiply(p_h, ts_f))
+        vm_s = np.multiply(st_s, st_s)
+        vm_s = np.add(pp, vm_s, out=_o(vm_s, pp))
+        tmp = np.multiply(p_h, st_s)
+        vm_s = np.add(vm_s, tmp, out=_o(vm_s, tmp))
+        vm_s = np.sqrt(vm_s, out=_o(vm_s))
+        a_in = np.abs(st_in)
+        s_vm = np.maximum(a_in, vm_s, out=_o(vm_s, a_in))
+        tr_s = np.add(st_s, p_h)
+        tr_s = np.abs(tr_s, out=_o(tr_s))
+        a_s = np.abs(st_s)
+        tr_s = np.maximum(tr_s, a_s, out=_o(tr_s, a_s))
+        tr_s = np.maximum(tr_s, p_h, out=_o(tr_s, p_h))
+        s_tr = np.maximum(a_in, tr_s, out=_o(tr_s, a_in))
+        if brittle_s:
             s_eq = np.where(brittle_shaft, np.maximum(np.maximum(st_in, st_s), 0.0), s_vm)
         else:
             s_eq = s_vm
-        shaft_tr = s_tr if shaft_tr is None else np.maximum(shaft_tr, s_tr)
-        shaft_state, shaft_eq = _pick(shaft_eq, s_eq, shaft_state, code, smaller=False)
+        if shaft_tr is None:
+            shaft_tr = _own(s_tr)
+        elif shaft_tr.shape == np.broadcast(shaft_tr, s_tr).shape:
+            np.maximum(shaft_tr, s_tr, out=shaft_tr)
+        else:
+            shaft_tr = np.maximum(shaft_tr, s_tr)
+        shaft_state, shaft_eq = _pick_into(shaft_eq, s_eq, shaft_state, code, smaller=False)
+    hub_sr = -hub_p
     de_min_asm_out = de_min_asm
     if plastic:
         # unloaded room-temperature pressure of the loosest fit; first loading of the tightest
         # at assembly (it gives the press-in force)
         p_min_asm = press(de_min_asm, peak_lo, p_pk_lo)
-        p_max_asm = _ep.contact_pressure(de_max_asm, *ep_args)
+        p_max_asm = _first_loading(de_max_asm, peak_hi, p_pk_hi, ep_args)
     else:
         p_min_asm = np.maximum(de_min_asm * c_p, 0.0)
         p_max_asm = np.maximum(de_max_asm * c_p, 0.0)

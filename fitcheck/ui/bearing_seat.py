@@ -149,7 +149,7 @@ def _details(r: bearings.BearingSeatResult, system: str, name: str) -> None:
     st.subheader("Checks")
     widgets.show_checks(r.checks, system, key=f"{PREFIX}.checks")
     for n in r.notes:
-        st.caption("• " + widgets.esc(n))
+        st.caption("• " + widgets.esc(widgets.prose(n, system)))
     from fitcheck.ui import shaft_box
     shaft_box.render(getattr(r, "shaft", None), system, key=f"{PREFIX}.shaft", notes=False)
     st.subheader("Clearance budget")

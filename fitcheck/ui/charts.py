@@ -120,10 +120,7 @@ def lines(df: pd.DataFrame, *, x: str, y: str, series: str, x_title: str, y_titl
                        "mark": {"type": "area", "opacity": 0.15, "color": "#2b6cb0"},
                        "encoding": {"x": enc["x"], "y": enc["y"]}})
     layers.append({"mark": {"type": "line", "strokeWidth": 2}, "encoding": enc})
-    for value, text in hrules:
-        layers.append(_rule("y", value, text))
-    for value, text in vrules:
-        layers.append(_rule("x", value, text))
+    layers += _rules(hrules, vrules)
     spec = {"height": height, "layer": layers,
             "config": {"axis": {"grid": True, "gridOpacity": 0.4}}}
     if title:
@@ -131,22 +128,35 @@ def lines(df: pd.DataFrame, *, x: str, y: str, series: str, x_title: str, y_titl
     st.vega_lite_chart(df, spec, width="stretch", key=key)
 
 
-def _rule(axis: str, value: float, text: str) -> dict:
-    other = "x" if axis == "y" else "y"
-    return {
-        "data": {"values": [{"v": float(value), "t": text}]},
-        "layer": [
-            {"mark": {"type": "rule", "color": "#b83232", "strokeDash": [4, 3]},
-             "encoding": {axis: {"field": "v", "type": "quantitative"},
-                          "tooltip": [{"field": "t", "type": "nominal", "title": "line"},
-                                      {"field": "v", "type": "quantitative", "format": ".4~g"}]}},
-            {"mark": {"type": "text", "align": "left", "dx": 4, "dy": -6, "fontSize": 11,
-                      "color": "#b83232"},
-             "encoding": {axis: {"field": "v", "type": "quantitative"},
-                          other: {"value": 4},
-                          "text": {"field": "t"}}},
-        ],
-    }
+#: Dash patterns of the reference lines, one per line (they tell the lines apart in the legend).
+RULE_DASHES = ([5, 3], [10, 3], [2, 2], [10, 3, 2, 3], [6, 2, 2, 2, 2, 2], [1, 3])
+RULE_COLOR = "#b83232"
+
+
+def _rules(hrules: Sequence[tuple] = (), vrules: Sequence[tuple] = ()) -> list[dict]:
+    """Reference lines across the chart (``(value, text)`` pairs: ``hrules`` at a y value,
+    ``vrules`` at an x value), named in a legend of their own.
+
+    The names go into the legend (each line with its own dash pattern) rather than beside the
+    lines, so lines close together never have their labels drawn over each other.
+    """
+    names = list(dict.fromkeys(str(t) for _, t in [*hrules, *vrules]))
+    dash = {"field": "t", "type": "nominal", "title": None,
+            "scale": {"domain": names,
+                      "range": [RULE_DASHES[i % len(RULE_DASHES)] for i in range(len(names))]},
+            "legend": {"orient": "bottom", "labelLimit": 320, "symbolType": "stroke",
+                       "symbolStrokeColor": RULE_COLOR, "symbolStrokeWidth": 1.5}}
+    out = []
+    for axis, rules in (("y", hrules), ("x", vrules)):
+        if rules:
+            out.append({
+                "data": {"values": [{"v": float(v), "t": str(t)} for v, t in rules]},
+                "mark": {"type": "rule", "color": RULE_COLOR, "strokeWidth": 1.5},
+                "encoding": {
+                    axis: {"field": "v", "type": "quantitative"}, "strokeDash": dash,
+                    "tooltip": [{"field": "t", "type": "nominal", "title": "line"},
+                                {"field": "v", "type": "quantitative", "format": ".4~g"}]}})
+    return out
 
 
 def waterfall(df: pd.DataFrame, *, stage: str, group: str, start: str, end: str, y_title: str,
@@ -172,8 +182,7 @@ def waterfall(df: pd.DataFrame, *, stage: str, group: str, start: str, end: str,
                             "text": {"field": end, "type": "quantitative", "format": ".1f"}}},
               {"data": {"values": [{"v": 0.0}]}, "mark": {"type": "rule", "color": "#555555"},
                "encoding": {"y": {"field": "v", "type": "quantitative"}}}]
-    for value, text in hrules:
-        layers.append(_rule("y", value, text))
+    layers += _rules(hrules)
     spec = {"height": height, "layer": layers, "transform": [
         {"calculate": f"max(datum['{start}'], datum['{end}'])", "as": "top"}]}
     if title:
@@ -217,10 +226,9 @@ def histogram(hist: Mapping, *, x_title: str, scale: float = 1.0, key: str, heig
     }
     layers: list[dict] = [{"mark": {"type": "bar", "color": "#4a7a8c", "opacity": 0.75,
                                     "binSpacing": 0}, "encoding": enc}]
-    for row, (text, value) in enumerate(hist["limits"]):
-        rule = _rule("x", value * scale, text)
-        rule["layer"][1]["encoding"]["y"] = {"value": 4 + 14 * row}  # labels of close lines apart
-        layers.append(rule)
+    layers += _rules(vrules=[(value * scale, text) for text, value in hist["limits"]])
+    if hist["limits"]:
+        height += 40  # the legend of the lines below the chart keeps the bars their height
     spec = {"height": height, "layer": layers,
             "config": {"axis": {"grid": True, "gridOpacity": 0.4}}}
     if title:

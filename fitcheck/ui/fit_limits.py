@@ -185,9 +185,8 @@ def render() -> None:
     import pandas as pd  # here, not at the top: the figures show before it loads
 
     with st.expander("Preferred fits", expanded=False):
-        st.dataframe(pd.DataFrame([{"basis": p.basis, "fit": p.fit, "use": p.description,
-                                    "source": p.source} for p in prefs]),
-                     hide_index=True, width="stretch", key="fl.pref_table")
+        widgets.static_table(pd.DataFrame([{"basis": p.basis, "fit": p.fit, "use": p.description,
+                                            "source": p.source} for p in prefs]), key="fl.pref_table")
 
 
 def _class_select(label: str, key: str, options: list[str], current: str) -> None:
@@ -235,7 +234,7 @@ def _show_fit(f: fits.Fit, system: str) -> None:
         table[f"{z.feature} {z.cls} [in]"] = [
             f"{d['upper_in']:+.5f}", f"{d['lower_in']:+.5f}", f"{d['max_in']:.5f}",
             f"{d['min_in']:.5f}", f"{unitsys.magnitude(d['it_um'], 'small_length', 'inch'):.5f}"]
-    st.dataframe(pd.DataFrame(table), hide_index=True, width="stretch", key="fl.limits")
+    widgets.static_table(pd.DataFrame(table), key="fl.limits")
     _zone_chart(f, system)
 
 

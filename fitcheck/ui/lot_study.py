@@ -23,6 +23,7 @@ import streamlit as st
 
 from fitcheck import case as casefile
 from fitcheck import checks, fits, study
+from fitcheck.core import iso286
 from fitcheck.errors import InputError, InputErrors
 from fitcheck.search import (
     BEARING_HOUSING_GRADES,
@@ -393,7 +394,7 @@ def p_text(x: float) -> str:
     """A probability as shown on the page: three significant digits, 0 as 0."""
     if x != x:
         return "n/a"
-    return "0" if x == 0 else f"{x:.3g}"
+    return unitsys.probability(x, 3)
 
 
 def _study_results(r: study.StudyResult, system: str, name: str) -> None:
@@ -417,7 +418,7 @@ def _study_results(r: study.StudyResult, system: str, name: str) -> None:
             col.metric(label, p_text(b.p), help=fm.definition)
             col.caption(f"{s.confidence:.0%} interval {p_text(b.lo)} … {p_text(b.hi)}  \n"
                         f"by {METHODS.get(b.method, b.method)}")
-        c[2].metric("Lot passing all checks", f"{r.fraction_meeting_design_checks * 100:.5g} %",
+        c[2].metric("Lot passing all checks", f"{unitsys.num(r.fraction_meeting_design_checks * 100, 5)} %",
                     help="Share of the sampled joints meeting every check with its required "
                     "safety (slip safety, yield safety, speed, assembly).")
     with wc:
@@ -451,11 +452,11 @@ def _study_results(r: study.StudyResult, system: str, name: str) -> None:
             charts.histogram(_named_limits(d.histogram(), r), x_title=d.label + (f" [{sym}]" if sym else ""),
                              scale=f, key=f"{PREFIX}.{name}.hist.{key}", title=d.label)
     with st.expander("Random inputs of the study"):
-        st.dataframe(pd.DataFrame([{"input": v.name, "distribution": _marginal_text(v, system),
-                                    "meaning": v.description} for v in r.variables]),
-                     hide_index=True, width="stretch", key=f"{PREFIX}.variables")
+        widgets.static_table(pd.DataFrame([{"input": v.name, "distribution": _marginal_text(v, system),
+                                            "meaning": v.description} for v in r.variables]),
+                             key=f"{PREFIX}.variables")
     for n in r.notes:
-        st.caption(f"Note: {widgets.esc(n)}")
+        st.caption(f"Note: {widgets.esc(widgets.prose(n, state.system()))}")
 
 
 def _named_limits(hist: dict, r: study.StudyResult) -> dict:
@@ -479,12 +480,12 @@ def _probability_table(r: study.StudyResult) -> None:
             "mode": fm.name,
             "plain sampling": f"{pl.failures:,} of {pl.n:,} = {p_text(pl.p)}",
             f"{s.confidence:.0%} interval": f"{p_text(pl.lo)} … {p_text(pl.hi)}",
-            "FORM": "—" if f is None else (f"β = {f.beta:.3g}, p = {p_text(f.p)}"
+            "FORM": "—" if f is None else (f"β = {unitsys.num(f.beta, 3)}, p = {p_text(f.p)}"
                                            + ("" if f.converged else " (not converged)")),
             "importance sampling": "—" if imp is None else f"{p_text(imp.p)} ± {p_text(imp.se)}",
             "used": f"{METHODS.get(fm.best.method, fm.best.method)}",
         })
-    st.dataframe(pd.DataFrame(rows), hide_index=True, width="stretch", key=f"{PREFIX}.probabilities")
+    widgets.static_table(pd.DataFrame(rows), key=f"{PREFIX}.probabilities")
 
 
 def _target_table(r: study.StudyResult) -> None:
@@ -494,8 +495,7 @@ def _target_table(r: study.StudyResult) -> None:
              "verdict": widgets.PASS if t.met else widgets.FAIL,
              f"plain samples for ±{s.rel_err:.0%} at the target":
                  f"{t.plain_samples_at_target:,.0f}"} for t in r.targets]
-    st.dataframe(widgets.styled(pd.DataFrame(rows)), hide_index=True, width="stretch",
-                 key=f"{PREFIX}.targets")
+    widgets.static_table(pd.DataFrame(rows), key=f"{PREFIX}.targets")
     need = max(t.plain_samples_at_target for t in r.targets)
     if need > r.samples:
         st.caption(f"Plain sampling alone would need about {need:,.0f} samples to resolve the "
@@ -511,8 +511,7 @@ def _percentile_table(r: study.StudyResult, system: str) -> None:
             row[f"{q:g} %"] = unitsys.show_in(d.percentile(q), d.unit, system)
         row["mean"] = unitsys.show_in(d.mean, d.unit, system)
         rows.append(row)
-    st.dataframe(pd.DataFrame(rows), hide_index=True, width="stretch", key=f"{PREFIX}.percentiles",
-                 height=widgets.table_height(len(rows)))
+    widgets.static_table(pd.DataFrame(rows), key=f"{PREFIX}.percentiles")
 
 
 def _marginal_text(v, system: str) -> str:
@@ -573,7 +572,9 @@ ADMIT = f"{PREFIX}.admit"   # the admitted fit set, kept across page switches
 BASES = {"hole": "hole basis", "shaft": "shaft basis"}
 FIT_SET = {"bases": ["hole", "shaft"], "holes": list(DEFAULT_HOLES),
            "shaft_grades": list(DEFAULT_SHAFT_GRADES), "shafts": list(DEFAULT_SHAFTS),
-           "hole_grades": list(DEFAULT_HOLE_GRADES)}
+           "hole_grades": list(DEFAULT_HOLE_GRADES),
+           "shaft_letters": list(iso286.all_letters("shaft")),
+           "hole_letters": list(iso286.all_letters("hole"))}
 SEAT_SET = {"shaft_letters": list(BEARING_SHAFT_LETTERS), "shaft_grades": list(BEARING_SHAFT_GRADES),
             "housing_letters": list(BEARING_HOUSING_LETTERS),
             "housing_grades": list(BEARING_HOUSING_GRADES)}
@@ -611,13 +612,20 @@ def _admitted_widgets(table: str) -> None:
     with st.expander("Fits admitted to the search", icon=":material/tune:"):
         if table == "pressfit":
             st.pills("Systems", list(BASES), key=f"{k}.bases", selection_mode="multi",
-                     format_func=BASES.get, help="Hole-basis fits (H with every shaft letter), "
-                     "shaft-basis fits (h with every hole letter), or both.")
+                     format_func=BASES.get, help="Hole-basis fits (H with the shaft letters "
+                     "chosen), shaft-basis fits (h with the hole letters chosen), or both.")
             c = st.columns(2)
             c[0].multiselect("Basis holes", HOLE_BASES, key=f"{k}.holes")
             c[0].multiselect("Shaft grades (IT) with them", GRADES, key=f"{k}.shaft_grades")
+            c[0].multiselect("Shaft letters with them", FIT_SET["shaft_letters"],
+                             key=f"{k}.shaft_letters",
+                             help="Deviation letters of the shafts mated with the basis holes "
+                             "(e.g. only p … u for interference fits).")
             c[1].multiselect("Basis shafts", SHAFT_BASES, key=f"{k}.shafts")
             c[1].multiselect("Hole grades (IT) with them", GRADES, key=f"{k}.hole_grades")
+            c[1].multiselect("Hole letters with them", FIT_SET["hole_letters"],
+                             key=f"{k}.hole_letters",
+                             help="Deviation letters of the holes mated with the basis shafts.")
         else:
             c = st.columns(2)
             c[0].multiselect("Shaft letters", SHAFT_LETTERS, key=f"{k}.shaft_letters")
@@ -646,15 +654,15 @@ def _search_button(label: str, text: str) -> bool:
 
 
 def _fit_search_section(name: str, text: str) -> None:
-    st.caption("Hole-basis fits (basis holes with shafts of every letter in the grades chosen) "
-               "and shaft-basis fits (basis shafts with holes of every letter) that ISO 286 "
+    st.caption("Hole-basis fits (basis holes with shafts of the letters and grades chosen) "
+               "and shaft-basis fits (basis shafts with holes of the letters and grades chosen) that ISO 286 "
                "defines at the joint's size, with the checks and required safeties of the "
                "press-fit page.")
     admitted = _admitted("pressfit")  # seeds the widgets first
     _admitted_widgets("pressfit")
-    if not (admitted["holes"] and admitted["shaft_grades"]) and \
-            not (admitted["shafts"] and admitted["hole_grades"]):
-        st.info("Admit at least one basis class with one grade to search.")
+    if not (admitted["holes"] and admitted["shaft_grades"] and admitted["shaft_letters"]) and \
+            not (admitted["shafts"] and admitted["hole_grades"] and admitted["hole_letters"]):
+        st.info("Admit at least one basis class with one grade and one letter to search.")
         return
     if not _search_button("Search fits", _token(text, "pressfit")):
         return
@@ -697,8 +705,7 @@ def _fit_search_section(name: str, text: str) -> None:
             rows.append(row)
         st.markdown("**Passing fits** (largest slip safety at the loosest fit first; "
                     "★ preferred fit)")
-        st.dataframe(pd.DataFrame(rows), hide_index=True, width="stretch",
-                     key=f"{PREFIX}.passing", height=widgets.table_height(min(len(rows), 12)))
+        widgets.long_table(pd.DataFrame(rows), key=f"{PREFIX}.passing", what="passing fits")
         _take_picker(name, r, own)
     if r.rejected:
         rows = [{"fit": f"{c.hole}/{c.shaft}", "note": "★ preferred" if c.preferred else "",
@@ -707,11 +714,9 @@ def _fit_search_section(name: str, text: str) -> None:
                  "slip safety, loosest": unitsys.num(c.slip_safety_min, 3),
                  "fails (margin)": _failing(c)} for c in r.rejected[:10]]
         st.markdown("**Nearest rejected fits** (the nearest to passing first)")
-        st.dataframe(pd.DataFrame(rows), hide_index=True, width="stretch",
-                     key=f"{PREFIX}.rejected", height=widgets.table_height(len(rows)),
-                     column_config={"fails (margin)": st.column_config.TextColumn(width="large")})
+        widgets.static_table(pd.DataFrame(rows), key=f"{PREFIX}.rejected")
     for n in r.notes:
-        st.caption(f"Note: {widgets.esc(n)}")
+        st.caption(f"Note: {widgets.esc(widgets.prose(n, state.system()))}")
 
 
 def _take_picker(name: str, r, own: str | None) -> None:
@@ -791,8 +796,7 @@ def _seat_search_section(name: str, text: str) -> None:
                  "fails (margin)": _failing(c)} for c in items]
         st.markdown(f"**{seat.capitalize()} classes** ({'housing' if seat == 'shaft' else 'shaft'}"
                     " as given; passing ranked first; ★ recommended)")
-        st.dataframe(widgets.styled(pd.DataFrame(rows)), hide_index=True, width="stretch",
-                     key=f"{PREFIX}.{seat}s", height=widgets.table_height(min(len(rows), 12)))
+        widgets.long_table(pd.DataFrame(rows), key=f"{PREFIX}.{seat}s", what=f"{seat} classes")
         good = [c.cls for c in items if c.ok]
         if good:
             ss, key = st.session_state, f"{PREFIX}.take.{seat}"
@@ -804,7 +808,7 @@ def _seat_search_section(name: str, text: str) -> None:
                         disabled=chosen == given, on_click=_take_seat, args=(name, seat, chosen),
                         icon=":material/input:")
     for n in r.notes:
-        st.caption(f"Note: {widgets.esc(n)}")
+        st.caption(f"Note: {widgets.esc(widgets.prose(n, state.system()))}")
 
 
 if __name__ == "__main__":

@@ -104,7 +104,7 @@ def _summary(r: pressfit.PressFitResult, system: str, name: str) -> None:
                            name=name)
     if r.ok:
         widgets.search_link(TABLE, name)
-    verdicts.pressfit_states(r)
+    verdicts.pressfit_states(r, system)
     st.subheader(f"{widgets.esc(r.name or 'Joint')}: {widgets.esc(r.fit or 'given interference')}, "
                  f"Ø {unitsys.show(r.diameter, 'length', system)} × "
                  f"{unitsys.show(r.length, 'length', system)}")
@@ -180,7 +180,7 @@ def _details(r: pressfit.PressFitResult, system: str, name: str) -> None:
         table = {"quantity": [q for q, _, _ in rows]}
         for h, case in zip(heads, cases, strict=True):
             table[h] = [_show_case(getattr(case, attr), kind, system) for _, attr, kind in rows]
-        st.dataframe(pd.DataFrame(table), hide_index=True, width="stretch", key=f"{PREFIX}.cases")
+        widgets.static_table(pd.DataFrame(table), key=f"{PREFIX}.cases")
         widgets.kv_table([
             ("friction μ slip / press", f"{r.mu_slip:g} / {r.mu_press:g} ({r.friction_source})"),
             ("hub outer diameter used", f"{unitsys.show(r.hub_outer_diameter, 'length', system)}"

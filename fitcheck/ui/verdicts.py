@@ -11,12 +11,13 @@ import math
 import streamlit as st
 
 from fitcheck import display
+from fitcheck.ui import widgets
 
 
-def pressfit_states(r) -> None:
+def pressfit_states(r, system: str = "SI") -> None:
     """The verdict's cause and next step, and the state governing each side of the joint."""
     if getattr(r, "headline", ""):
-        st.caption(r.headline)
+        st.caption(widgets.esc(widgets.prose(r.headline, system)))
     if getattr(r, "governing_loose_state", ""):
         st.caption(f"Loosest: {r.governing_loose_state} · tightest (hub): {r.governing_tight_state} · "
                    f"loosening speed: {r.loosening_speed_text}")
@@ -25,7 +26,7 @@ def pressfit_states(r) -> None:
 def bearing_clearance(r, system: str) -> None:
     """Mean clearance (the verdict), the probable range and P(clearance < limit), with its state."""
     if getattr(r, "headline", ""):
-        st.caption(r.headline)
+        st.caption(widgets.esc(widgets.prose(r.headline, system)))
     if not math.isfinite(getattr(r, "clearance_mean_um", math.nan)):
         return
 

@@ -62,6 +62,8 @@ def render() -> None:
     c[2].metric("Failing checks", len(failed))
     c[3].metric("Joints with input problems", len(problems))
 
+    _failing_joints(results, system)
+
     if problems:
         st.subheader("Joints that cannot be checked")
         for label, errs in problems.items():
@@ -82,14 +84,29 @@ def render() -> None:
             "margin": "—" if w is None else unitsys.margin_text(w.margin),
             "checks failing": sum(not c.passed for c in j.checks),
         })
-    st.dataframe(widgets.styled(pd.DataFrame(rows)), hide_index=True, width="stretch",
-                 key="cv.joints", height=widgets.table_height(len(rows)))
+    widgets.static_table(pd.DataFrame(rows), key="cv.joints")
 
     st.subheader("All checks, worst margin first")
-    st.dataframe(widgets.styled(widgets.checks_table(checks, system)), hide_index=True,
-                 width="stretch", key="cv.checks", height=widgets.table_height(len(checks)))
+    widgets.static_table(widgets.checks_table(checks, system), key="cv.checks")
     for label, msgs in notes.items():
         widgets.warnings_box([f"{label}: {m}" for m in msgs])
+
+
+def _weakest(j) -> float:
+    return min((c.margin for c in j.checks), default=math.inf)
+
+
+def _failing_joints(results, system: str) -> None:
+    """Every failing joint with each failing check, the library's cause and next step
+    (:mod:`fitcheck.advice`) and, for press fits and bearing seats, the link that opens the fit
+    (or seat) search with that joint selected."""
+    bad = sorted((j for j in results if not j.ok), key=_weakest)
+    if not bad:
+        return
+    st.subheader("Failing joints: why, and what to try")
+    for j in bad:
+        widgets.verdict_banner(False, None, system, checks=j.checks, table=j.table, name=j.name,
+                               joint=j.label)
 
 
 if __name__ == "__main__":

@@ -179,6 +179,12 @@ def choice_field(label: str, wkey: str, options: Sequence[str], help: str | None
         st.error(error_text(error), icon=":material/error:")
 
 
+def prose(text: str, system: str = "SI") -> str:
+    """A sentence of the library in the page's units and unit symbols ("19.8 um" -> "19.8 µm",
+    in inch "0.78 thou"); not yet escaped for Markdown."""
+    return unitsys.words(unitsys.text_in_system(text, system))
+
+
 def error_text(e: InputError) -> str:
     """The library's message for one input, as Markdown (user text escaped)."""
     text = f"**{esc(e.field)}**: "
@@ -257,21 +263,45 @@ def show_checks(checks: Sequence, system: str, key: str) -> None:
 VERDICT_MD = {PASS: f":green[**{PASS}**]", FAIL: f":red[**{FAIL}**]"}
 
 
+def _cell(v):
+    """A cell as shown: numbers the library did not format yet through ``display.num``."""
+    if isinstance(v, bool) or not isinstance(v, int | float):
+        return v
+    return unitsys.num(v) if isinstance(v, float) else str(v)
+
+
 def static_table(df: pd.DataFrame, key: str | None = None) -> None:
-    """A table that fits the page width and wraps its text columns (no inner scrolling)."""
+    """A table that fits the page width and wraps its text columns (no inner scrolling, no cell
+    cut off); a number not already written as text follows ``display.num``."""
     del key  # static tables keep no state
-    if "verdict" in df.columns and not df.empty:
-        df = df.assign(verdict=[VERDICT_MD.get(v, v) for v in df["verdict"]])
+    if not df.empty:
+        df = df.map(_cell)
+        if "verdict" in df.columns:
+            df = df.assign(verdict=[VERDICT_MD.get(v, v) for v in df["verdict"]])
     st.table(df, hide_index=True)
 
 
+#: Rows of a long table shown before the rest folds into an expander.
+LONG_ROWS = 12
+
+
+def long_table(df: pd.DataFrame, key: str | None = None, what: str = "rows") -> None:
+    """A static table whose first :data:`LONG_ROWS` rows are shown and the rest folded below."""
+    static_table(df.iloc[:LONG_ROWS], key=key)
+    if len(df) > LONG_ROWS:
+        with st.expander(f"All {len(df)} {what}"):
+            static_table(df.iloc[LONG_ROWS:], key=None if key is None else f"{key}.rest")
+
+
 def verdict_banner(ok: bool, worst=None, system: str = "SI", *, checks: Sequence = (),
-                   table: str | None = None, name: str | None = None) -> None:
+                   table: str | None = None, name: str | None = None,
+                   joint: str | None = None) -> None:
     """Whether every check holds; when not, every failing check with its cause and next step.
 
     ``checks`` (with ``table`` and ``name`` of the joint) lists the failing ones with the
     library's words (:func:`fitcheck.advice.explain`) and a link that opens the fit search (or
     the seat search) with this joint selected. Without ``checks`` one line names ``worst``.
+    ``joint`` (a label such as "pressfit[gear]") heads the banner where several joints are shown.
     """
     from fitcheck import advice
 
@@ -285,6 +315,8 @@ def verdict_banner(ok: bool, worst=None, system: str = "SI", *, checks: Sequence
                          f"*{esc(a.next_step)}*")
         head = ("Does not hold: 1 check fails" if len(failing) == 1 else
                 f"Does not hold: {len(failing)} checks fail")
+        if joint is not None:
+            head = f"**{esc(joint)}** — {head[0].lower()}{head[1:]}"
         st.error(head + "\n\n" + "\n".join(lines), icon=":material/cancel:")
         actions = {advice.explain(table, getattr(c, "check", c)).action for c in failing}
         if name is not None and (advice.FIT_SEARCH in actions or advice.SEAT_SEARCH in actions):

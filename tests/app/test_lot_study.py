@@ -46,8 +46,19 @@ def _frame_by_columns(at, column: str):
     return next(d.value for d in [*at.dataframe, *at.table] if column in d.value.columns)
 
 
+def _long_frame(at, column: str, keep=lambda df: True):
+    """A long table shown in parts (its first rows, the rest folded below), joined again."""
+    import pandas as pd
+
+    parts = [d.value for d in [*at.dataframe, *at.table] if column in d.value.columns
+             and keep(d.value)]
+    return pd.concat(parts, ignore_index=True)
+
+
 def p_text(x: float) -> str:  # how the page prints a probability: 3 significant digits
-    return "0" if x == 0 else f"{x:.3g}"
+    from fitcheck.display import probability
+
+    return probability(x, 3)
 
 
 def chart_frame(el):
@@ -154,7 +165,7 @@ def test_search_fits_ranks_as_the_library(app_test):
     at.button(key="ls.run_search").click().run()
     assert not at.exception
     r = search_fits(joint_input(demo_doc(), "pressfit", PF))
-    passing = _frame_by_columns(at, "rank")
+    passing = _long_frame(at, "rank")
     assert list(passing["fit"]) == [f"{c.hole}/{c.shaft}" for c in r.passing]
     assert passing["slip safety, loosest"].iloc[0] == unitsys.num(r.best.slip_safety_min, 3)
     rejected = _frame_by_columns(at, "fails (margin)")
@@ -176,7 +187,7 @@ def test_taking_a_fit_writes_it_into_the_case(app_test):
     assert any(f"16 {fit}" in s.value for s in at.success)
     assert "case" in at.query_params  # the changed case is kept in the address
     # the search stays on screen and marks the fit now in the case
-    passing = _frame_by_columns(at, "rank")
+    passing = _long_frame(at, "rank")
     assert "in the case" in passing.loc[passing["fit"] == fit, "note"].iloc[0]
     at.switch_page("fitcheck/ui/press_fit.py").run()
     assert at.text_input(key=f"pf.{PF}.fit").value == f"16 {fit}"
@@ -194,7 +205,7 @@ def test_bearing_seat_search_and_take(app_test):
     at.button(key="ls.run_search").click().run()
     assert not at.exception
     r = search_bearing_seat(joint_input(demo_doc(), "bearing", BR))
-    shafts = next(d.value for d in [*at.dataframe, *at.table] if "class" in d.value.columns)
+    shafts = _long_frame(at, "class", lambda df: df["class"].str.islower().all())
     assert list(shafts["class"]) == [c.cls for c in r.shafts]
     assert shafts["rank"].map(type).nunique() == 1  # one type a column: Arrow converts it cleanly
     good = [c.cls for c in r.housings if c.ok and c.cls != r.housing_given]

@@ -8,6 +8,7 @@ the numbers shown equal a direct library call and follow the number format
 
 from __future__ import annotations
 
+import math
 import re
 import tomllib
 
@@ -145,7 +146,8 @@ def test_press_fit_headline_equals_the_library_and_the_table(app_test):
     m = metrics(at)
     assert m["Press-in force, largest"] == unitsys.show(r.press_force_max, "force", "SI")
     assert m["Hub heating temperature"] == unitsys.show_in(r.shrink_temperature_C, "degC", "SI")
-    cases = next(d.value for d in at.dataframe if "loosest, operating" in d.value.columns)
+    cases = next(d.value for d in [*at.dataframe, *at.table]
+                 if "loosest, operating" in d.value.columns)
     # the headline is the governing (loosest) operating state's and equals that column of the table
     column = "loosest, governing state"
     row = dict(zip(cases["quantity"], cases[column], strict=True))
@@ -156,16 +158,134 @@ def test_press_fit_headline_equals_the_library_and_the_table(app_test):
     assert helps["Torque capacity, loosest"].endswith(r.loosest_governing.label)
 
 
-@pytest.mark.parametrize("page", ["press_fit", "bearing_seat", "housing_screws", "fit_limits"])
-@pytest.mark.parametrize("system", ["SI", "inch"])
-def test_every_number_follows_the_format(app_test, page, system):
-    at = app_test(page, query={"u": system} if system == "inch" else None)
-    assert not at.exception
+def _shown(at) -> list[str]:
+    """Every metric, table cell and banner text of the page."""
     shown = [m.value for m in at.metric] + [m.label for m in at.metric]
     for t in [*at.dataframe, *at.table]:
         shown += [str(v) for v in t.value.to_numpy().ravel()]
-    bad = [s for s in shown if BAD_NUMBER.search(s)]
+    shown += [e.value for e in [*at.error, *at.success, *at.caption, *at.subheader]]
+    return shown
+
+
+def _run_study_and_search(at) -> None:
+    at.number_input(key="ls.samples").set_value(2000).run()
+    at.button(key="ls.run_study").click().run()
+    at.button(key="ls.run_search").click().run()
+
+
+@pytest.mark.parametrize("page", ["press_fit", "bearing_seat", "housing_screws", "fit_limits",
+                                  "whole_case", "lot_study", "seat_search", "case_file"])
+@pytest.mark.parametrize("system", ["SI", "inch"])
+def test_every_number_follows_the_format(app_test, page, system):
+    doc = failing_doc() if page == "whole_case" else demo_doc()
+    query = addr(doc) if page == "whole_case" else {}
+    if system == "inch":
+        query["u"] = system
+    if page == "seat_search":  # the lot-study page with a bearing seat: the seat-class search
+        query["search"] = "bearing:A-side-6202"
+    at = app_test("lot_study" if page == "seat_search" else page, query=query or None)
+    if page == "lot_study":
+        _run_study_and_search(at)
+    assert not at.exception
+    bad = [s for s in _shown(at) if BAD_NUMBER.search(s)]
     assert not bad, bad
+    # results are static tables: they wrap, no cell is cut off (editable inputs stay editors)
+    assert not [d for d in at.dataframe if not str(d.key).endswith(".editor")]
+
+
+# --------------------------------------------------------------------------- case verdict page
+
+def failing_bearing_doc() -> dict:
+    doc = failing_doc()
+    doc["bearing"][0]["shaft"] = "r6"  # ISO 286 r6 on a 6202: the inner ring is overstressed
+    return doc
+
+
+def test_case_verdict_lists_every_failing_check_with_cause_step_and_link(app_test):
+    doc = failing_bearing_doc()
+    at = app_test("whole_case", query=addr(doc))
+    assert not at.exception
+    res = casefile.evaluate(casefile.loads(tomlwrite.dumps(doc)))
+    failing = [j for j in res.joints if not j.ok]
+    assert {j.table for j in failing} == {"pressfit", "bearing"}
+    banners = [e.value for e in at.error]
+    for j in failing:
+        banner = next(b for b in banners if esc(j.label) in b and "does not hold" in b)
+        advices = advice.failing(j.table, j.checks)
+        assert advices and banner.count("\n- ") == len(advices)
+        for a in advices:
+            assert esc(a.check) in banner and esc(a.cause) in banner and esc(a.next_step) in banner
+        for c in j.checks:
+            if not c.passed:  # value, limit and margin as the library gives them
+                assert esc(unitsys.margin_text(c.margin)) in banner or \
+                    unitsys.margin_text(c.margin) in banner
+    # a joint that holds gets no banner of its own
+    for j in res.joints:
+        if j.ok:
+            assert not any(esc(j.label) in b and "does not hold" in b for b in banners)
+    links = {(link.proto.page, link.proto.query_string.replace("%3A", ":").replace("%5B", "[")
+              .replace("%5D", "]")) for link in at.get("page_link")}
+    want = {f"search=pressfit:{PF}", "search=bearing:A-side-6202"}
+    got = {q for page, q in links if "lot" in page}
+    assert want <= {q.replace("+", " ") for q in got}, links
+    assert sorted(link.proto.label for link in at.get("page_link") if "lot" in link.proto.page) \
+        == ["Search fits for this joint", "Search seat classes for this joint"]
+
+
+def test_case_verdict_link_opens_the_seat_search_for_the_bearing(app_test):
+    doc = failing_bearing_doc()
+    at = app_test("lot_study", query={**addr(doc), "search": "bearing:A-side-6202"})
+    assert not at.exception
+    assert at.selectbox(key="ls.joint").value == "bearing seat: A-side-6202"
+    assert any("bearing 6202" in s.value for s in at.subheader)  # the search ran on arrival
+
+
+def test_case_verdict_tables_equal_the_library(app_test):
+    doc = failing_bearing_doc()
+    at = app_test("whole_case", query=addr(doc))
+    res = casefile.evaluate(casefile.loads(tomlwrite.dumps(doc)))
+    tables = [t.value for t in at.table]
+    joints_t = next(t for t in tables if "weakest check" in t.columns)
+    checks_t = next(t for t in tables if "reference" in t.columns and "joint" in t.columns)
+    assert len(checks_t) == sum(len(j.checks) for j in res.joints)
+    worst = min(res.checks, key=lambda c: c.margin)
+    assert checks_t["check"].iloc[0] == worst.check.name
+    assert checks_t["margin"].iloc[0] == unitsys.margin_text(worst.margin)
+    assert checks_t["value"].iloc[0] == unitsys.show_in(worst.check.value, worst.check.unit, "SI")
+    # full texts, not cut: every reference and note as the library wrote it
+    refs = {c.check.reference for c in res.checks}
+    assert set(checks_t["reference"]) == refs
+    assert set(joints_t["joint"]) == {j.label for j in res.joints}
+
+
+# --------------------------------------------------------------------------- fit search letters
+
+def test_the_admitted_letters_change_the_search_as_the_library(app_test):
+    at = app_test("lot_study", query={"search": f"pressfit:{PF}"})
+    at.multiselect(key="ls.admit.pressfit.shaft_letters").set_value(["p", "r", "s"]).run()
+    at.multiselect(key="ls.admit.pressfit.hole_letters").set_value(["S"]).run()
+    at.button(key="ls.run_search").click().run()
+    assert not at.exception
+    inp = casefile.loads(tomlwrite.dumps(demo_doc())).pressfits[0]
+    r = search_fits(inp, shaft_letters=("p", "r", "s"), hole_letters=("S",))
+    assert any(f"{len(r.passing)} of {r.evaluated} fits" in s.value for s in at.subheader)
+    shown = [t.value for t in at.table if "rank" in t.value.columns]
+    fits_shown = [f for t in shown for f in t["fit"]]
+    assert fits_shown == [f"{c.hole}/{c.shaft}" for c in r.passing]
+    for f in fits_shown:
+        hole, shaft = f.split("/")
+        assert (hole.startswith("H") and shaft.rstrip("0123456789") in ("p", "r", "s")) or \
+            (shaft.startswith("h") and hole.rstrip("0123456789") == "S")
+    # every figure of the ranking as the library gives it, in the number format
+    first = shown[0].iloc[0]
+    assert first["slip safety, loosest"] == unitsys.num(r.best.slip_safety_min, 3)
+    assert first["hub yield safety"] == unitsys.num(r.best.hub_yield_safety, 3)
+    rejected = next(t.value for t in at.table if "fails (margin)" in t.value.columns)
+    for (_, row), c in zip(rejected.iterrows(), r.rejected, strict=False):
+        assert row["fit"] == f"{c.hole}/{c.shaft}"
+        for n, m in c.failing:  # the whole text of every failing check, not cut
+            assert (f"{n} ({unitsys.margin_text(m)})" if math.isfinite(m) else n) \
+                in row["fails (margin)"]
 
 
 def test_a_joint_name_is_shown_literally(app_test):
@@ -176,3 +296,56 @@ def test_a_joint_name_is_shown_literally(app_test):
     texts = [e.value for e in [*at.subheader, *at.markdown, *at.error, *at.success, *at.caption]]
     assert any(esc("![x](http://example.invalid/x.png) :red[y]") in t for t in texts)
     assert not any("](http://example.invalid" in t and "\\]" not in t for t in texts)
+
+
+# --------------------------------------------------------------------------- charts
+
+def _rule_layers(spec: dict) -> list[dict]:
+    out = []
+    for layer in spec.get("layer", []):
+        out += _rule_layers(layer)
+        mark = layer.get("mark", {})
+        if isinstance(mark, dict) and mark.get("type") == "rule" and "strokeDash" in \
+                layer.get("encoding", {}):
+            out.append(layer)
+    return out
+
+
+def _text_on_lines(spec: dict) -> list[dict]:
+    """Text marks drawn at a reference line's own data (labels that can overlap)."""
+    out = []
+    for layer in spec.get("layer", []):
+        out += _text_on_lines(layer)
+        mark = layer.get("mark", {})
+        if isinstance(mark, dict) and mark.get("type") == "text" and "data" in layer:
+            out.append(layer)
+        if "data" in layer and any(isinstance(sub.get("mark"), dict) and
+                                   sub["mark"].get("type") == "text"
+                                   for sub in layer.get("layer", [])):
+            out.append(layer)
+    return out
+
+
+@pytest.mark.parametrize("page", ["press_fit", "bearing_seat", "housing_screws", "lot_study"])
+def test_reference_lines_are_named_in_the_legend_not_over_each_other(app_test, page):
+    import json
+
+    at = app_test(page)
+    if page == "lot_study":
+        at.number_input(key="ls.samples").set_value(2000).run()
+        at.button(key="ls.run_study").click().run()
+    assert not at.exception
+    named = 0
+    for el in at.get("vega_lite_chart"):
+        spec = json.loads(el.proto.spec)
+        assert not _text_on_lines(spec), el.proto.spec[:300]
+        for layer in _rule_layers(spec):
+            names = [v["t"] for v in layer["data"]["values"]]
+            dash = layer["encoding"]["strokeDash"]
+            assert set(names) <= set(dash["scale"]["domain"])  # every line named in the legend
+            assert dash["legend"] is not None
+            # each name its own dash pattern, so close lines stay apart in the legend
+            pats = dash["scale"]["range"]
+            assert len({json.dumps(p) for p in pats}) == len(pats)
+            named += len(names)
+    assert named  # every one of these pages draws at least one reference line
