@@ -44,6 +44,7 @@ from __future__ import annotations
 
 import dataclasses
 import datetime as _dt
+import functools
 import importlib
 import importlib.resources
 import math
@@ -508,19 +509,10 @@ def _scope_errors(fld: str, v) -> list[InputError]:
         return []
     if not isinstance(v, str) or not v.strip()[:1].lstrip("+-.").isdigit():
         return []
-    from .qparse import quantity_or_none
-
-    try:
-        q = quantity_or_none(v)
-        if q is None:  # text outside the quantity grammar: the engine refuses it in its own words
-            return []
-        spec = SCOPE_LIMITS.get(str(q.dimensionality))
-        if spec is None:
-            return []
-        unit, lo, hi = spec
-        x = float(q.to(unit).magnitude)
-    except Exception:  # text pint cannot read: the engine reports it with its own words
+    reading = _scope_reading(v)
+    if reading is None:
         return []
+    unit, lo, hi, x = reading
     if not math.isfinite(x):
         return []
     if unit == "degC":
@@ -533,6 +525,25 @@ def _scope_errors(fld: str, v) -> list[InputError]:
     if bad:
         return [InputError(fld, v, allowed, "absurd for a compact drive: unit or exponent mixed up?")]
     return []
+
+
+@functools.lru_cache(maxsize=4096)
+def _scope_reading(v: str) -> tuple[str, float, float, float] | None:
+    """``(unit, lo, hi, value in unit)`` of a quantity text whose kind :data:`SCOPE_LIMITS` bounds,
+    else None (remembered: the browser checks the same texts after every input)."""
+    from .qparse import quantity_or_none
+
+    try:
+        q = quantity_or_none(v)
+        if q is None:  # text outside the quantity grammar: the engine refuses it in its own words
+            return None
+        spec = SCOPE_LIMITS.get(str(q.dimensionality))
+        if spec is None:
+            return None
+        unit, lo, hi = spec
+        return unit, lo, hi, float(q.to(unit).magnitude)
+    except Exception:  # text pint cannot read: the engine reports it with its own words
+        return None
 
 
 def _blame_conditions(e: InputError, label: str, inherited: Mapping) -> InputError:

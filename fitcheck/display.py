@@ -11,6 +11,7 @@ the text it replaced, so switching back gives the very same text again.
 
 from __future__ import annotations
 
+import functools
 import math
 
 from fitcheck.units import CORE, Q_, quantity, ureg
@@ -421,9 +422,15 @@ def words(text: str) -> str:
     >>> words("default 20 degC, 2.5 um, 3 N*m")
     'default 20 °C, 2.5 µm, 3 N·m'
     """
+    return _words(str(text))
+
+
+@functools.lru_cache(maxsize=4096)
+def _words(text: str) -> str:
+    # remembered: the pages rewrite the same input descriptions on every rerun
     import re
 
-    out = str(text)
+    out = text
     for a, b in _UNIT_WORDS:
         out = re.sub(r"(?<=[\d\s(])" + re.escape(a) + r"(?![A-Za-z*])", b, out)
     return out

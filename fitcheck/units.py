@@ -200,21 +200,42 @@ def to_core(value, kind: str, field: str, *, lo: float | None = None, hi: float 
     """
     if kind not in CORE:
         raise KeyError(kind)
-    q = _parse(_offset_as_delta(value) if kind in _DELTA_KINDS else value, field)
-    if isinstance(q, float):
-        out = q
-    else:
-        try:
-            if kind in ("dimensionless", "angle") and q.dimensionless:
-                out = float(q.to(CORE[kind]).magnitude) if kind == "angle" else float(q.to("").magnitude)
-            else:
-                out = float(q.to(CORE[kind]).magnitude)
-        except pint.DimensionalityError:
-            raise InputError(field, value, f"{_article(kind)}, e.g. {_EXAMPLES[kind]}") from None
-        except Exception:
-            raise InputError(field, value, f"{_article(kind)}, e.g. {_EXAMPLES[kind]}") from None
+    key = (value, kind) if type(value) is str else None
+    out = _READ.get(key) if key is not None else None
+    if out is None:
+        out = _convert(value, kind, field)
+        if key is not None:
+            _remember(key, out)
     _check_range(out, value, kind, field, lo, hi, lo_open, hi_open)
     return out
+
+
+#: Texts already read, by (text, kind): the float in the core unit before any range check.
+#: Reading a text with pint costs about 0.1 ms (a case has about 100 of them, and the browser
+#: checks the case again after every input); the same text always reads to the same float.
+_READ: dict[tuple[str, str], float] = {}
+_READ_MAX = 4096
+
+
+def _remember(key: tuple[str, str], out: float) -> None:
+    if len(_READ) >= _READ_MAX:
+        _READ.clear()
+    _READ[key] = out
+
+
+def _convert(value, kind: str, field: str) -> float:
+    """``value`` read and converted to the core unit of ``kind`` (no range check)."""
+    q = _parse(_offset_as_delta(value) if kind in _DELTA_KINDS else value, field)
+    if isinstance(q, float):
+        return q
+    try:
+        if kind in ("dimensionless", "angle") and q.dimensionless:
+            return float(q.to(CORE[kind]).magnitude) if kind == "angle" else float(q.to("").magnitude)
+        return float(q.to(CORE[kind]).magnitude)
+    except pint.DimensionalityError:
+        raise InputError(field, value, f"{_article(kind)}, e.g. {_EXAMPLES[kind]}") from None
+    except Exception:
+        raise InputError(field, value, f"{_article(kind)}, e.g. {_EXAMPLES[kind]}") from None
 
 
 def _article(kind: str) -> str:
@@ -266,14 +287,19 @@ def temperature_c(value, field: str, *, lo: float = ABSOLUTE_ZERO_C, hi: float |
     ...
     fitcheck.errors.InputError: t: got '-5 K'; allowed: a temperature above absolute zero (-273.15 degC = 0 K)
     """
-    q = _parse(value, field)
-    if isinstance(q, float):
-        out = q
-    else:
-        try:
-            out = float(q.to("degC").magnitude)
-        except Exception:
-            raise InputError(field, value, "a temperature, e.g. '80 degC', '176 degF' or '353 K'") from None
+    key = (value, "degC") if type(value) is str else None
+    out = _READ.get(key) if key is not None else None
+    if out is None:
+        q = _parse(value, field)
+        if isinstance(q, float):
+            out = q
+        else:
+            try:
+                out = float(q.to("degC").magnitude)
+            except Exception:
+                raise InputError(field, value, "a temperature, e.g. '80 degC', '176 degF' or '353 K'") from None
+        if key is not None:
+            _remember(key, out)
     if not math.isfinite(out):
         raise InputError(field, value, "a finite temperature")
     if out <= ABSOLUTE_ZERO_C + 1e-9 or out < lo:

@@ -10,7 +10,6 @@ from __future__ import annotations
 
 import math
 
-import pandas as pd
 import streamlit as st
 
 from fitcheck import bearings, checks
@@ -135,6 +134,8 @@ def _budget_chart(r: bearings.BearingSeatResult, system: str, name: str) -> None
         for stage, a, b in zip(bearings.BUDGET_STAGES, (0.0, s[0], s[1], 0.0), s, strict=True):
             rows.append({"stage": stage, "pairing": group, "from": a * f, "to": b * f})
     lim = r.clearance_min_um * f
+    import pandas as pd  # here, not at the top: the verdict and the figures show before it loads
+
     charts.waterfall(pd.DataFrame(rows), stage="stage", group="pairing", start="from", end="to",
                      order=bearings.BUDGET_STAGES, y_title=charts.label("radial clearance", "small_length", system),
                      hrules=[(lim, "limit")] if lim else [],

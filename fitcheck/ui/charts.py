@@ -10,11 +10,14 @@ computes nothing of its own.
 from __future__ import annotations
 
 from collections.abc import Mapping, Sequence
+from typing import TYPE_CHECKING
 
-import pandas as pd
 import streamlit as st
 
 from fitcheck.ui import unitsys
+
+if TYPE_CHECKING:  # pandas is imported where a chart is drawn: the first result shows sooner
+    import pandas as pd
 
 #: Chart axes of small lengths in inch units read in thousandths of an inch (0.0012 in -> 1.2).
 THOU = "0.001 in"
@@ -205,6 +208,8 @@ def histogram(hist: Mapping, *, x_title: str, scale: float = 1.0, key: str, heig
 
     ``scale`` converts the bin edges and limit values to the display unit.
     """
+    import pandas as pd
+
     df = pd.DataFrame({"lo": [v * scale for v in hist["lo"]], "hi": [v * scale for v in hist["hi"]],
                        "share": list(hist["share"]), "count": list(hist["count"])})
     enc = {

@@ -10,7 +10,6 @@ from __future__ import annotations
 
 import re
 
-import pandas as pd
 import streamlit as st
 
 from fitcheck import fits
@@ -183,6 +182,8 @@ def render() -> None:
             else:
                 _show_fit(f, system)
     inch.ansi_section(_show_fit, system)  # ASME B4.1 classes (fitcheck/ui/inch.py)
+    import pandas as pd  # here, not at the top: the figures show before it loads
+
     with st.expander("Preferred fits", expanded=False):
         widgets.static_table(pd.DataFrame([{"basis": p.basis, "fit": p.fit, "use": p.description,
                                             "source": p.source} for p in prefs]), key="fl.pref_table")
@@ -219,6 +220,8 @@ def _show_fit(f: fits.Fit, system: str) -> None:
                         help="shaft upper limit − hole lower limit")
         c[2].metric("Fit tolerance", show(f.fit_tolerance_um),
                     help="sum of the hole and shaft tolerances")
+    import pandas as pd
+
     zones = [z for z in (f.hole, f.shaft) if z is not None]
     dicts = [z.to_dict() for z in zones]
     table = {"limit": ["upper deviation", "lower deviation", "largest size", "smallest size",
@@ -237,6 +240,8 @@ def _show_fit(f: fits.Fit, system: str) -> None:
 
 def _zone_chart(f: fits.Fit, system: str) -> None:
     """The tolerance zones of hole and shaft about the zero line (limits from the library)."""
+    import pandas as pd
+
     fu, unit = charts.small_factor(system)
     rows = [{"zone": f"{z.feature} {z.cls}", "lower": z.lower_um * fu, "upper": z.upper_um * fu}
             for z in (f.hole, f.shaft) if z is not None]

@@ -8,7 +8,6 @@ from __future__ import annotations
 
 import copy
 
-import pandas as pd
 import streamlit as st
 
 from fitcheck import checks, materials, screws, threads
@@ -104,6 +103,8 @@ def bind_layers(name: str, entry: dict) -> None:
 def draw_layers(name: str, errors) -> None:
     base_key, ed_key = _layer_keys(name)
     base = st.session_state.get(base_key, [])
+    import pandas as pd  # here, not at the top: the verdict and the figures show before it loads
+
     df = pd.DataFrame(_layer_rows(base), columns=["thickness", "material"])
     st.markdown("**Clamped layers** (from under the head down)")
     st.data_editor(df, key=ed_key, num_rows="dynamic", hide_index=True, width="stretch",
@@ -183,6 +184,8 @@ def _joint_chart(r: screws.ScrewJointResult, system: str, name: str) -> None:
         lines += [("screw under F_A", [(fS, j["F_V"]), (fS + fA, j["F_S"])]),
                   ("F_A", [(fS + fA, j["F_KR"]), (fS + fA, j["F_S"])]),
                   ("F_KR", [(fS, j["F_KR"]), (fS + fA, j["F_KR"])])]
+    import pandas as pd
+
     df = pd.DataFrame([{"line": n, "x": x * fx, "F": y * fy} for n, pts in lines for x, y in pts])
     charts.lines(df, x="x", y="F", series="line", detail="line",
                  dashed=["screw under F_A", "F_KR"],

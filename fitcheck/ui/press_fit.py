@@ -8,7 +8,6 @@ band against the required torque, and every check with its margin.
 
 from __future__ import annotations
 
-import pandas as pd
 import streamlit as st
 
 from fitcheck import checks, fits, pressfit
@@ -156,6 +155,8 @@ def _details(r: pressfit.PressFitResult, system: str, name: str) -> None:
     widgets.show_checks(r.checks, system, key=f"{PREFIX}.checks")
     from fitcheck.ui import shaft_box
     shaft_box.render(getattr(r, "shaft", None), system, key=f"{PREFIX}.shaft")
+    import pandas as pd  # here, not at the top: the verdict and the figures show before it loads
+
     left, right = st.columns([1, 1], gap="large")
     with left:
         st.subheader("Loosest and tightest")
@@ -195,6 +196,8 @@ def _details(r: pressfit.PressFitResult, system: str, name: str) -> None:
 
 def _capacity_chart(r: pressfit.PressFitResult, system: str, name: str) -> None:
     """Torque capacity across the tolerance band with the required torque (library data)."""
+    import pandas as pd
+
     b = r.capacity_band()
     fl, ft = charts.factor("small_length", system), charts.factor("torque", system)
     df = pd.DataFrame({"interference": b["interference"] * 1000.0 * fl,
@@ -211,6 +214,8 @@ def _capacity_chart(r: pressfit.PressFitResult, system: str, name: str) -> None:
 
 def _wall_chart(r: pressfit.PressFitResult, system: str, name: str) -> None:
     """Radial, tangential and von Mises stress through shaft and hub at the tightest fit."""
+    import pandas as pd
+
     prof = r.wall_profile()
     fl, fs = charts.factor("length", system), charts.factor("stress", system)
     frames = []

@@ -18,7 +18,9 @@ from __future__ import annotations
 import base64
 import binascii
 import copy
+import threading
 import zlib
+from collections import OrderedDict
 from collections.abc import Iterable
 
 import streamlit as st
@@ -63,9 +65,32 @@ def decode(token: str) -> str:
         raise InputError("address", "case=…", "a case saved by this program") from None
 
 
+#: TOML texts of recent documents by the ``repr`` of the document (writing TOML costs about 10 ms
+#: a case; a page asks for the text of the same document several times a run and on every rerun).
+_TEXTS: OrderedDict[str, str] = OrderedDict()
+_TEXTS_MAX = 256
+_TEXTS_LOCK = threading.Lock()
+
+
 def doc_text(doc: dict) -> str:
-    """The document as TOML text (as a case file would hold it, without the header)."""
-    return tomlwrite.dumps(doc)
+    """The document as TOML text (as a case file would hold it, without the header).
+
+    Remembered by the ``repr`` of the document: a document holds only TOML's plain values
+    (text, numbers, booleans, dates, lists, tables), whose ``repr`` tells every two apart
+    (``1``, ``1.0`` and ``True``; ``'1'`` and ``1``), so equal keys mean equal texts.
+    """
+    key = repr(doc)
+    with _TEXTS_LOCK:
+        text = _TEXTS.get(key)
+        if text is not None:
+            _TEXTS.move_to_end(key)
+            return text
+    text = tomlwrite.dumps(doc)  # raises for a value TOML cannot hold: nothing is remembered
+    with _TEXTS_LOCK:
+        _TEXTS[key] = text
+        while len(_TEXTS) > _TEXTS_MAX:
+            _TEXTS.popitem(last=False)
+    return text
 
 
 @st.cache_data(show_spinner=False)

@@ -4,13 +4,16 @@ from __future__ import annotations
 
 import re
 from collections.abc import Iterable, Mapping, Sequence
+from typing import TYPE_CHECKING
 
-import pandas as pd
 import streamlit as st
 
 import fitcheck
 from fitcheck.errors import InputError
 from fitcheck.ui import state, unitsys
+
+if TYPE_CHECKING:  # pandas is imported where a table is made: the first result shows sooner
+    import pandas as pd
 
 PASS, FAIL = "✔ holds", "✘ FAILS"
 SENSE = {">=": "≥", "<=": "≤"}
@@ -224,6 +227,8 @@ def checks_table(checks: Iterable, system: str, joint_of=None) -> pd.DataFrame:
     ``checks`` are :class:`fitcheck.checks.Check` objects or ``fitcheck.case.CaseCheck``
     (then a joint column is added).
     """
+    import pandas as pd
+
     rows = []
     for c in checks:
         chk = getattr(c, "check", c)
@@ -253,6 +258,11 @@ def show_checks(checks: Sequence, system: str, key: str) -> None:
     static_table(df, key=key)
 
 
+#: Verdicts in a static table, coloured with Markdown (st.table renders Markdown in its cells):
+#: a pandas Styler costs about 30 ms a table and half a second the first time.
+VERDICT_MD = {PASS: f":green[**{PASS}**]", FAIL: f":red[**{FAIL}**]"}
+
+
 def _cell(v):
     """A cell as shown: numbers the library did not format yet through ``display.num``."""
     if isinstance(v, bool) or not isinstance(v, int | float):
@@ -264,8 +274,11 @@ def static_table(df: pd.DataFrame, key: str | None = None) -> None:
     """A table that fits the page width and wraps its text columns (no inner scrolling, no cell
     cut off); a number not already written as text follows ``display.num``."""
     del key  # static tables keep no state
-    sty = styled(df) if "verdict" in df.columns and not df.empty else df.style
-    st.table(sty.format(_cell).hide(axis="index"))
+    if not df.empty:
+        df = df.map(_cell)
+        if "verdict" in df.columns:
+            df = df.assign(verdict=[VERDICT_MD.get(v, v) for v in df["verdict"]])
+    st.table(df, hide_index=True)
 
 
 #: Rows of a long table shown before the rest folds into an expander.
@@ -349,5 +362,7 @@ def warnings_box(messages: Iterable[str]) -> None:
 
 
 def kv_table(rows: Mapping[str, str] | Sequence[tuple[str, str]], key: str | None = None) -> None:
+    import pandas as pd
+
     items = list(rows.items()) if isinstance(rows, Mapping) else list(rows)
     static_table(pd.DataFrame(items, columns=["quantity", "value"]), key=key)
