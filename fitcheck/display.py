@@ -232,6 +232,18 @@ def probability(x: float, digits: int = 3) -> str:
     return f"{num(m, digits)} × 10{str(e).translate(_SUPERSCRIPT)}"
 
 
+def deviation(v: float) -> str:
+    """A deviation or clearance with its sign, to 0.001 of its unit; zero reads "0".
+
+    Used on the fit diagrams of the plots and of the report, so both label a zone alike.
+
+    >>> deviation(18.0), deviation(-0.0004), deviation(-12.34567), deviation(0.0)
+    ('+18', '0', '-12.346', '0')
+    """
+    v = round(float(v), 3)
+    return f"{v:+g}" if v else "0"
+
+
 def margin_text(m: float | None, loaded: bool = True) -> str:
     """A check's relative margin as people read it.
 

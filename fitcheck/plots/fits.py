@@ -7,15 +7,11 @@ import math
 from matplotlib.figure import Figure
 from matplotlib.patches import Rectangle
 
+from ..display import deviation as _fmt
 from ._units import scale
 
 _HOLE = "#3b6ea5"
 _SHAFT = "#c9822b"
-
-
-def _fmt(v: float) -> str:
-    v = round(v, 3)
-    return f"{v:+g}" if v else "0"
 
 
 def plot_fit(fit, ax=None, *, units: str = "SI") -> Figure:

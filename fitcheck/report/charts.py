@@ -13,6 +13,7 @@ import math
 
 import numpy as np
 
+from ..display import deviation
 from ..plots._units import scale
 from .chart import Area, Chart, Line, Rule, Span, Text
 
@@ -22,8 +23,7 @@ _BLUE, _ORANGE, _RED, _GREEN, _PURPLE = "#1f77b4", "#ff7f0e", "#d62728", "#2ca02
 
 
 def _fmt(v: float) -> str:
-    v = round(v, 3)
-    return (f"{v:+g}" if v else "0").replace("-", "−")
+    return deviation(v).replace("-", "−")
 
 
 def _num(v: float, fmt: str) -> str:
