@@ -33,38 +33,11 @@ def esc(text) -> str:
     return _MD.sub(r"\\\1", " ".join(str(text).split()))
 
 
-def table_height(n_rows: int) -> int:
-    """Height that shows every row of a table without its own scroll bar (up to 40 rows)."""
-    return 38 + 35 * max(1, min(n_rows, 40))
-
-
-def styled(df: pd.DataFrame):
-    """A verdict column coloured: green when it holds, red when it fails."""
-    if "verdict" not in df.columns or df.empty:
-        return df
-    return df.style.map(lambda v: "color: #0b6e3a; font-weight: 600" if v == PASS else
-                        "color: #b3261e; font-weight: 700" if v == FAIL else "", subset=["verdict"])
-
-
 # --------------------------------------------------------------------------- page furniture
 
 def caution() -> None:
     """The caution every page carries (``fitcheck.CAUTION``)."""
     st.warning(fitcheck.CAUTION, icon=":material/warning:")
-
-
-def png(fig, dpi: int = 120) -> bytes:
-    """A library figure (a plain ``matplotlib.figure.Figure``, never registered with pyplot) as PNG."""
-    import io
-
-    buf = io.BytesIO()
-    fig.savefig(buf, format="png", dpi=dpi)  # no bbox_inches="tight": it draws twice
-    return buf.getvalue()
-
-
-def image(data: bytes | None, alt: str) -> None:
-    if data:
-        st.image(data, width="stretch", alt=alt)
 
 
 def notice() -> None:
