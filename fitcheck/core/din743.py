@@ -32,7 +32,12 @@ DIN 743-3:2012-12, Teil 3: Werkstoff-Festigkeitswerte (σ_B, σ_S, σ_zdW, σ_bW
 
 from __future__ import annotations
 
+import functools
+
 import numpy as np
+
+from . import blocks as _blocks
+from .blocks import in_blocks
 
 __all__ = [
     "D_BK", "K1_GROUPS", "RATIO_SIGMA_ZDW", "RATIO_SIGMA_BW", "RATIO_TAU_TW",
@@ -41,9 +46,8 @@ __all__ = [
     "nominal_stresses", "press_fit_seat", "validity",
 ]
 
-#: Joints per block of work in :func:`press_fit_seat` (arrays of 125 kB: they stay in the CPU
-#: caches and below the C library's threshold for mapping fresh memory)
-CHUNK = 16000
+#: Joints per block of work in :func:`press_fit_seat` (see :mod:`fitcheck.core.blocks`)
+CHUNK = _blocks.CHUNK
 #: Reference diameter of the tabulated notch factors of press fits [mm] (DIN 743-2:2012); the tests
 #: behind them used D_F = 40 mm joints: FKM report 325 (2015, project 294 II), abstract
 D_BK = 40.0
@@ -508,26 +512,9 @@ def press_fit_seat(*, d, di=0.0, sigma_B_dB, sigma_S_dB, sigma_zdW_dB=None, sigm
               moment_amplitude=moment_amplitude, torque_mean=torque_mean,
               torque_amplitude=torque_amplitude, axial_mean=axial_mean, moment_max=moment_max,
               torque_max=torque_max, axial_max=axial_max)
-    shapes = {np.shape(v) for v in kw.values() if v is not None and np.ndim(v) > 0}
-    if len(shapes) != 1 or np.prod(next(iter(shapes))) <= 2 * CHUNK:
-        return _seat(group=group, mean_stress_case=mean_stress_case, **kw)
-    # Long arrays (all of one shape) in cache-sized blocks: the same elementwise arithmetic, so
-    # the same numbers, without whole-array temporaries spilling out of the CPU caches.
-    shape = next(iter(shapes))
-    n = int(np.prod(shape))
-    flat = {k: (np.asarray(v, dtype=float).reshape(-1) if v is not None and np.ndim(v) > 0 else v)
-            for k, v in kw.items()}
-    out: dict = {}
-    for start in range(0, n, CHUNK):
-        sl = slice(start, min(start + CHUNK, n))
-        part = _seat(group=group, mean_stress_case=mean_stress_case,
-                     **{k: (v[sl] if isinstance(v, np.ndarray) else v) for k, v in flat.items()})
-        if not out:
-            out = {k: (np.empty(n, dtype=np.asarray(v).dtype) if np.ndim(v) else v) for k, v in part.items()}
-        for k, v in part.items():
-            if np.ndim(v):
-                out[k][sl] = v
-    return {k: (v.reshape(shape) if np.ndim(v) else v) for k, v in out.items()}
+    # long arrays in cache-sized blocks (fitcheck.core.blocks): the same numbers, less memory traffic
+    return in_blocks(functools.partial(_seat, group=group, mean_stress_case=mean_stress_case), kw,
+                     CHUNK, full_outputs=False)
 
 
 def _seat(*, d, di, sigma_B_dB, sigma_S_dB, sigma_zdW_dB, sigma_bW_dB, tau_tW_dB, group, d_B, d_eff,

@@ -99,12 +99,13 @@ from __future__ import annotations
 
 import numpy as np
 
+from . import blocks as _blocks
 from . import elastoplastic as _ep
+from .blocks import in_blocks
 
 __all__ = ["evaluate", "OUTPUT_KEYS"]
 
-CHUNK = 16000  # joints per block: arrays of 125 kB stay in the CPU caches and below the C
-#                library's threshold for mapping fresh memory (no page faults per temporary)
+CHUNK = _blocks.CHUNK  # joints per block (see fitcheck.core.blocks)
 
 OUTPUT_KEYS = (
     "delta_eff_min_op", "delta_eff_max_op", "delta_eff_min_asm", "delta_eff_max_asm",
@@ -168,29 +169,8 @@ def evaluate(*, interference_min, interference_max=None, d, L, di=0.0, Do,
     >>> round(float(r["torque_capacity_min"]) / 1e3)
     1014
     """
-    kw = dict(locals())
-    arrays = [np.shape(v) for v in kw.values() if v is not None and np.ndim(v) > 0]
-    shape = np.broadcast_shapes(*arrays) if arrays else ()
-    n = int(np.prod(shape)) if shape else 1
-    if n <= 2 * CHUNK:
-        out = _block(**kw)
-        full = np.broadcast_shapes(*(np.shape(v) for v in out.values()))
-        return {k: (v if np.shape(v) == full else np.broadcast_to(v, full)) for k, v in out.items()}
-    # Work through long arrays in cache-sized blocks: the same vectorised arithmetic, about
-    # twice as fast as whole-array temporaries that spill out of the CPU caches.
-    flat = {k: (np.broadcast_to(np.asarray(v, dtype=np.float64 if np.asarray(v).dtype != bool else bool),
-                                shape).reshape(-1) if v is not None and np.ndim(v) > 0 else v)
-            for k, v in kw.items()}
-    out: dict = {}
-    for start in range(0, n, CHUNK):
-        sl = slice(start, min(start + CHUNK, n))
-        part = _block(**{k: (v[sl] if isinstance(v, np.ndarray) and v.ndim == 1 else v)
-                         for k, v in flat.items()})
-        if not out:
-            out = {k: np.empty(n, dtype=np.asarray(v).dtype) for k, v in part.items()}
-        for k, v in part.items():
-            out[k][sl] = v
-    return {k: v.reshape(shape) for k, v in out.items()}
+    # long arrays in cache-sized blocks (fitcheck.core.blocks): the same numbers, about twice as fast
+    return in_blocks(_block, dict(locals()), CHUNK)
 
 
 def state_temperatures(T_shaft, T_hub, T_assembly, T_min=None, T_max=None) -> list[tuple]:
