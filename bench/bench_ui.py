@@ -14,7 +14,7 @@ Goals (issue 15): median ≤ 250 ms on the press-fit page and ≤ 400 ms on ever
 ≤ 3 s and within 1.3× of the bare page. Asserts nothing: the figures depend on the machine, so
 compare them with the bare page of the same run.
 
-Usage: ``python bench/bench_ui.py [--n 12]``
+Usage: ``python bench/bench_ui.py [--n 12] [--pages press-fit ...] [--no-bare]``
 """
 
 from __future__ import annotations
@@ -221,6 +221,10 @@ def _ms(xs: list[tuple[float, float, float]]) -> str:
 def main(argv: list[str] | None = None) -> None:
     ap = argparse.ArgumentParser(description=__doc__.splitlines()[0])
     ap.add_argument("--n", type=int, default=12, help="interactions per page (after 2 warm-up)")
+    ap.add_argument("--pages", nargs="+", choices=list(PAGES), default=list(PAGES),
+                    help="measure only these pages (default: all)")
+    ap.add_argument("--no-bare", action="store_true",
+                    help="skip the bare page (its figures are then not printed)")
     args = ap.parse_args(argv)
     if CHROMIUM is None:
         print("Chromium not found (/usr/bin/chromium): nothing measured")
@@ -234,14 +238,17 @@ def main(argv: list[str] | None = None) -> None:
     with sync_playwright() as pw:
         browser = pw.chromium.launch(executable_path=CHROMIUM, headless=True, args=ARGS)
         try:
-            with served(bare) as (base, t0, pid):
-                bare_first = first_result(browser, base, t0, "")
-                bare_cpu = cpu_seconds(pid)
-                bare_times = measure_pages(browser, base, args.n,
-                                           {"": ("text", "Value", [str(i) for i in range(2, 60)])},
-                                           pid)
-            print(f"bare page: streamlit run -> first result {bare_first:.2f} s "
-                  f"(server CPU {bare_cpu:.2f} s); input -> idle: {_ms(bare_times[''])}", flush=True)
+            bare_first = bare_cpu = float("nan")
+            if not args.no_bare:
+                with served(bare) as (base, t0, pid):
+                    bare_first = first_result(browser, base, t0, "")
+                    bare_cpu = cpu_seconds(pid)
+                    bare_times = measure_pages(
+                        browser, base, args.n,
+                        {"": ("text", "Value", [str(i) for i in range(2, 60)])}, pid)
+                print(f"bare page: streamlit run -> first result {bare_first:.2f} s "
+                      f"(server CPU {bare_cpu:.2f} s); input -> idle: {_ms(bare_times[''])}",
+                      flush=True)
             with served(APP) as (base, t0, pid):
                 try:
                     app_first = first_result(browser, base, t0, "press-fit")
@@ -254,7 +261,7 @@ def main(argv: list[str] | None = None) -> None:
                       f"{app_first / bare_first:.2f}× the bare page (goal ≤ 3 s and ≤ 1.3×); "
                       f"server CPU {app_cpu:.2f} s, {app_cpu / bare_cpu:.2f}× the bare page's",
                       flush=True)
-                for path, spec in PAGES.items():
+                for path, spec in ((p, PAGES[p]) for p in args.pages):
                     try:
                         xs = measure_pages(browser, base, args.n, {path: spec}, pid)[path]
                     except Exception as exc:  # noqa: BLE001
