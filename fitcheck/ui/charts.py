@@ -120,9 +120,10 @@ def lines(df: pd.DataFrame, *, x: str, y: str, series: str, x_title: str, y_titl
                        "mark": {"type": "area", "opacity": 0.15, "color": "#2b6cb0"},
                        "encoding": {"x": enc["x"], "y": enc["y"]}})
     layers.append({"mark": {"type": "line", "strokeWidth": 2}, "encoding": enc})
-    layers += _rules(hrules, vrules)
-    spec = {"height": height, "layer": layers,
-            "config": {"axis": {"grid": True, "gridOpacity": 0.4}}}
+    rule_layers, datasets = _rules(hrules, vrules)
+    layers += rule_layers
+    spec = _with_datasets({"height": height, "layer": layers,
+                           "config": {"axis": {"grid": True, "gridOpacity": 0.4}}}, datasets)
     if title:
         spec["title"] = {"text": title, "fontSize": 13, "anchor": "start"}
     st.vega_lite_chart(df, spec, width="stretch", key=key)
@@ -133,30 +134,44 @@ RULE_DASHES = ([5, 3], [10, 3], [2, 2], [10, 3, 2, 3], [6, 2, 2, 2, 2, 2], [1, 3
 RULE_COLOR = "#b83232"
 
 
-def _rules(hrules: Sequence[tuple] = (), vrules: Sequence[tuple] = ()) -> list[dict]:
+def _rules(hrules: Sequence[tuple] = (), vrules: Sequence[tuple] = ()) -> tuple[list[dict], dict]:
     """Reference lines across the chart (``(value, text)`` pairs: ``hrules`` at a y value,
-    ``vrules`` at an x value), named in a legend of their own.
+    ``vrules`` at an x value), named in a legend of their own: ``(layers, datasets)``.
 
     The names go into the legend (each line with its own dash pattern) rather than beside the
-    lines, so lines close together never have their labels drawn over each other.
+    lines, so lines close together never have their labels drawn over each other. The values
+    travel as named datasets (``spec["datasets"]``), not inside the spec: a changed value (a new
+    required torque) then changes only the data, and the browser updates the drawn chart instead
+    of building it anew.
     """
+    import pandas as pd
+
     names = list(dict.fromkeys(str(t) for _, t in [*hrules, *vrules]))
     dash = {"field": "t", "type": "nominal", "title": None,
             "scale": {"domain": names,
                       "range": [RULE_DASHES[i % len(RULE_DASHES)] for i in range(len(names))]},
             "legend": {"orient": "bottom", "labelLimit": 320, "symbolType": "stroke",
                        "symbolStrokeColor": RULE_COLOR, "symbolStrokeWidth": 1.5}}
-    out = []
+    out, data = [], {}
     for axis, rules in (("y", hrules), ("x", vrules)):
         if rules:
+            name = f"rules_{axis}"
+            data[name] = pd.DataFrame({"v": [float(v) for v, _ in rules],
+                                       "t": [str(t) for _, t in rules]})
             out.append({
-                "data": {"values": [{"v": float(v), "t": str(t)} for v, t in rules]},
+                "data": {"name": name},
                 "mark": {"type": "rule", "color": RULE_COLOR, "strokeWidth": 1.5},
                 "encoding": {
                     axis: {"field": "v", "type": "quantitative"}, "strokeDash": dash,
                     "tooltip": [{"field": "t", "type": "nominal", "title": "line"},
                                 {"field": "v", "type": "quantitative", "format": ".4~g"}]}})
-    return out
+    return out, data
+
+
+def _with_datasets(spec: dict, datasets: dict) -> dict:
+    if datasets:
+        spec["datasets"] = datasets
+    return spec
 
 
 def waterfall(df: pd.DataFrame, *, stage: str, group: str, start: str, end: str, y_title: str,
@@ -182,9 +197,10 @@ def waterfall(df: pd.DataFrame, *, stage: str, group: str, start: str, end: str,
                             "text": {"field": end, "type": "quantitative", "format": ".1f"}}},
               {"data": {"values": [{"v": 0.0}]}, "mark": {"type": "rule", "color": "#555555"},
                "encoding": {"y": {"field": "v", "type": "quantitative"}}}]
-    layers += _rules(hrules)
-    spec = {"height": height, "layer": layers, "transform": [
-        {"calculate": f"max(datum['{start}'], datum['{end}'])", "as": "top"}]}
+    rule_layers, datasets = _rules(hrules)
+    layers += rule_layers
+    spec = _with_datasets({"height": height, "layer": layers, "transform": [
+        {"calculate": f"max(datum['{start}'], datum['{end}'])", "as": "top"}]}, datasets)
     if title:
         spec["title"] = {"text": title, "fontSize": 13, "anchor": "start"}
     st.vega_lite_chart(df, spec, width="stretch", key=key)
@@ -226,11 +242,12 @@ def histogram(hist: Mapping, *, x_title: str, scale: float = 1.0, key: str, heig
     }
     layers: list[dict] = [{"mark": {"type": "bar", "color": "#4a7a8c", "opacity": 0.75,
                                     "binSpacing": 0}, "encoding": enc}]
-    layers += _rules(vrules=[(value * scale, text) for text, value in hist["limits"]])
+    rule_layers, datasets = _rules(vrules=[(value * scale, text) for text, value in hist["limits"]])
+    layers += rule_layers
     if hist["limits"]:
         height += 40  # the legend of the lines below the chart keeps the bars their height
-    spec = {"height": height, "layer": layers,
-            "config": {"axis": {"grid": True, "gridOpacity": 0.4}}}
+    spec = _with_datasets({"height": height, "layer": layers,
+                           "config": {"axis": {"grid": True, "gridOpacity": 0.4}}}, datasets)
     if title:
         spec["title"] = {"text": title, "fontSize": 13, "anchor": "start"}
     st.vega_lite_chart(df, spec, width="stretch", key=key)

@@ -309,16 +309,33 @@ def draw_inputs(table: str, prefix: str, name: str, groups: Sequence[tuple[str, 
     label = casefile.joint_label(table, name)
     all_keys = [f.key for _, fs in groups for f in fs]
     by_key, rest = widgets.match_errors(errors, label, all_keys)
+    ss = st.session_state
     for i, (title, fs) in enumerate(groups):
         bad = any(f.key in by_key for f in fs)
-        with st.expander(title + (" — check the inputs" if bad else ""), expanded=(i < expanded) or bad,
-                         icon=":material/error:" if bad else None):
+        gk = group_key(prefix, title)
+        if bad:
+            ss[gk] = True  # a group holding an error opens, so the message is seen
+        group = st.expander(title + (" — check the inputs" if bad else ""), expanded=i < expanded,
+                            icon=":material/error:" if bad else None, key=gk, on_change="rerun")
+        if not group.open:
+            # a closed group's widgets are not drawn at all (the page reruns faster). Their
+            # values live in the document (``bind`` took them in before); the session forgets
+            # the widgets, so they are seeded from the document again when the group opens
+            for f in fs:
+                ss.pop(wkey(prefix, name, f.key), None)
+            continue
+        with group:
             cols = st.columns(2)
             for j, f in enumerate(fs):
                 with cols[j % 2]:
                     _draw(prefix, name, f, keys.get(f.key, ""), by_key.get(f.key))
     for e in rest:
         st.error(widgets.error_text(e), icon=":material/error:")
+
+
+def group_key(prefix: str, title: str) -> str:
+    """Session key of an input group's open/closed state on a page (shared by the page's joints)."""
+    return f"ui.group.{prefix}.{title}"
 
 
 def _inherited(key: str) -> str | None:

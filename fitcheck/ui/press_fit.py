@@ -110,31 +110,29 @@ def _summary(r: pressfit.PressFitResult, system: str, name: str) -> None:
                  f"{unitsys.show(r.length, 'length', system)}")
     gov = _governing(r, "torque_capacity", r.torque_capacity_min)
     gov_p = _governing(r, "pressure", r.pressure_min)
-    c = st.columns(3)
-    c[0].metric("Torque capacity, loosest", unitsys.show(r.torque_capacity_min, "torque", system),
-                help=f"transmissible torque at the loosest fit, governing state: {gov}")
-    c[1].metric("Torque required", unitsys.show(r.torque, "torque", system))
-    c[2].metric("Slip safety, loosest", unitsys.num(r.slip_safety_min, 3),
-                help="capacity over the load (torque and thrust combined)")
-    c = st.columns(3)
-    c[0].metric("Pressure, loosest", unitsys.show(r.pressure_min, "stress", system),
-                help=f"contact pressure at the loosest fit, governing state: {gov_p}")
-    c[1].metric("Pressure, tightest", unitsys.show(r.pressure_max, "stress", system),
-                help="contact pressure at the tightest fit")
-    c[2].metric("Hub yield safety", unitsys.num(r.hub_yield_safety, 3),
-                help="Rp0.2 over the largest von Mises stress at the hub bore, tightest fit")
-    c = st.columns(3)
-    c[0].metric("Shaft yield safety", unitsys.num(r.shaft_yield_safety, 3))
-    c[1].metric("Loosening speed", unitsys.show(r.loosening_speed, "speed", system, digits=3),
-                help="speed at which the loosest fit loses all its pressure")
-    c = st.columns(3)
-    used = "used" if r.assembly == "press" else "for comparison"
-    c[0].metric("Press-in force, largest", unitsys.show(r.press_force_max, "force", system),
-                help=f"pressing on at the tightest fit, room temperature ({used})")
-    used = "used" if r.assembly == "shrink" else "for comparison"
-    c[1].metric("Hub heating temperature", unitsys.show_in(r.shrink_temperature_C, "degC", system),
-                help=f"shrinking on: hub temperature for the tightest fit plus the joining "
-                f"clearance ({used})")
+    as_press = "used" if r.assembly == "press" else "for comparison"
+    as_shrink = "used" if r.assembly == "shrink" else "for comparison"
+    widgets.figures([
+        ("Torque capacity, loosest", unitsys.show(r.torque_capacity_min, "torque", system),
+         f"transmissible torque at the loosest fit, governing state: {gov}"),
+        ("Torque required", unitsys.show(r.torque, "torque", system)),
+        ("Slip safety, loosest", unitsys.num(r.slip_safety_min, 3),
+         "capacity over the load (torque and thrust combined)"),
+        ("Pressure, loosest", unitsys.show(r.pressure_min, "stress", system),
+         f"contact pressure at the loosest fit, governing state: {gov_p}"),
+        ("Pressure, tightest", unitsys.show(r.pressure_max, "stress", system),
+         "contact pressure at the tightest fit"),
+        ("Hub yield safety", unitsys.num(r.hub_yield_safety, 3),
+         "Rp0.2 over the largest von Mises stress at the hub bore, tightest fit"),
+        ("Shaft yield safety", unitsys.num(r.shaft_yield_safety, 3)),
+        ("Loosening speed", unitsys.show(r.loosening_speed, "speed", system, digits=3),
+         "speed at which the loosest fit loses all its pressure"),
+        ("Press-in force, largest", unitsys.show(r.press_force_max, "force", system),
+         f"pressing on at the tightest fit, room temperature ({as_press})"),
+        ("Hub heating temperature", unitsys.show_in(r.shrink_temperature_C, "degC", system),
+         f"shrinking on: hub temperature for the tightest fit plus the joining clearance "
+         f"({as_shrink})"),
+    ])
     pressfit_design.show_plastic_zone(r, system)
     _capacity_chart(r, system, name)
 

@@ -6,9 +6,7 @@ elastic-plastic design, the plastic zone of the hub beside the other results. No
 
 from __future__ import annotations
 
-import streamlit as st
-
-from fitcheck.ui import unitsys
+from fitcheck.ui import unitsys, widgets
 from fitcheck.ui.joints import Field
 
 
@@ -21,11 +19,12 @@ def show_plastic_zone(r, system: str) -> None:
     """Plastic zone of the hub at the tightest fit (elastic-plastic design only)."""
     if getattr(r, "design", "elastic") != "elastic-plastic":
         return
-    c = st.columns(3)
     depth = (r.plastic_zone_diameter - r.diameter) / 2.0
-    c[0].metric("Plastic zone, Ø", unitsys.show(r.plastic_zone_diameter, "length", system),
-                help="diameter to which the hub yields at the tightest fit (= bore: elastic hub)")
-    c[1].metric("Plastic zone, depth", unitsys.show(depth, "length", system),
-                help="depth of the yielded ring from the hub bore")
-    c[2].metric("Plastic utilisation", unitsys.num(r.plastic_utilisation, 3),
-                help="plastic share of the hub wall over the permitted share (≤ 1 passes)")
+    widgets.figures([
+        ("Plastic zone, Ø", unitsys.show(r.plastic_zone_diameter, "length", system),
+         "diameter to which the hub yields at the tightest fit (= bore: elastic hub)"),
+        ("Plastic zone, depth", unitsys.show(depth, "length", system),
+         "depth of the yielded ring from the hub bore"),
+        ("Plastic utilisation", unitsys.num(r.plastic_utilisation, 3),
+         "plastic share of the hub wall over the permitted share (≤ 1 passes)"),
+    ])

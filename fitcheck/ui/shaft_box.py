@@ -19,15 +19,16 @@ def render(res, system: str, key: str, notes: bool = True) -> None:
         return
     with st.container(border=True):
         st.markdown("**Shaft at the hub edge (DIN 743)**")
-        c = st.columns(4)
-        c[0].metric("Fatigue safety", display.num(res.fatigue_safety, 3),
-                    help=f"required ≥ {res.fatigue_safety_required:g}")
-        c[1].metric("Yield safety", display.num(res.static_safety, 3),
-                    help=f"required ≥ {res.static_safety_required:g}")
-        c[2].metric("Notch factor βσ", display.num(res.notch_factor_bending, 3),
-                    help="press fit, bending, at the seat diameter")
-        c[3].metric("Notch factor βτ", display.num(res.notch_factor_torsion, 3),
-                    help="press fit, torsion, at the seat diameter")
+        widgets.figures([
+            ("Fatigue safety", display.num(res.fatigue_safety, 3),
+             f"required ≥ {res.fatigue_safety_required:g}"),
+            ("Yield safety", display.num(res.static_safety, 3),
+             f"required ≥ {res.static_safety_required:g}"),
+            ("Notch factor βσ", display.num(res.notch_factor_bending, 3),
+             "press fit, bending, at the seat diameter"),
+            ("Notch factor βτ", display.num(res.notch_factor_torsion, 3),
+             "press fit, torsion, at the seat diameter"),
+        ], width=160)
         rows = [(name, display.show(v, kind, system) if kind != "dimensionless" else display.num(v, 3))
                 for name, v, kind in res.loads()]
         rows.append(("loads from", res.load_source))

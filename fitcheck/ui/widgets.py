@@ -231,9 +231,8 @@ def show_checks(checks: Sequence, system: str, key: str) -> None:
     static_table(df, key=key)
 
 
-#: Verdicts in a static table, coloured with Markdown (st.table renders Markdown in its cells):
-#: a pandas Styler costs about 30 ms a table and half a second the first time.
-VERDICT_MD = {PASS: f":green[**{PASS}**]", FAIL: f":red[**{FAIL}**]"}
+#: Verdict cells of a static table, coloured (classes of :data:`fitcheck.ui.app.STYLE`).
+VERDICT_CLASS = {PASS: "fc-pass", FAIL: "fc-fail"}
 
 
 def _cell(v):
@@ -243,15 +242,70 @@ def _cell(v):
     return unitsys.num(v) if isinstance(v, float) else str(v)
 
 
+def table_html(df: pd.DataFrame) -> str:
+    """A static table as HTML: every cell escaped (user text shows as typed), verdicts coloured.
+
+    The class ``fc-table`` marks it (and lets tests read it back with :func:`read_table_html`).
+    """
+    from html import escape
+
+    head = "".join(f"<th>{escape(str(c))}</th>" for c in df.columns)
+    rows = []
+    verdict = list(df.columns).index("verdict") if "verdict" in df.columns else -1
+    for values in df.itertuples(index=False, name=None):
+        cells = []
+        for i, v in enumerate(values):
+            text = escape(str(_cell(v)))
+            if i == verdict and v in VERDICT_CLASS:
+                text = f'<span class="{VERDICT_CLASS[v]}">{text}</span>'
+            cells.append(f"<td>{text}</td>")
+        rows.append("<tr>" + "".join(cells) + "</tr>")
+    return (f'<table class="fc-table"><thead><tr>{head}</tr></thead>'
+            f'<tbody>{"".join(rows)}</tbody></table>')
+
+
+def read_table_html(body: str) -> list[list[str]]:
+    """The rows of a :func:`table_html` table as text, the header row first (for tests and
+    checks of what a page shows)."""
+    from html.parser import HTMLParser
+
+    class _Rows(HTMLParser):
+        def __init__(self):
+            super().__init__()
+            self.rows: list[list[str]] = []
+            self.cell: list[str] | None = None
+
+        def handle_starttag(self, tag, attrs):
+            if tag == "tr":
+                self.rows.append([])
+            elif tag in ("td", "th"):
+                self.cell = []
+
+        def handle_endtag(self, tag):
+            if tag in ("td", "th") and self.cell is not None:
+                self.rows[-1].append("".join(self.cell))
+                self.cell = None
+
+        def handle_data(self, data):
+            if self.cell is not None:
+                self.cell.append(data)
+
+    p = _Rows()
+    p.feed(body)
+    return p.rows
+
+
 def static_table(df: pd.DataFrame, key: str | None = None) -> None:
     """A table that fits the page width and wraps its text columns (no inner scrolling, no cell
-    cut off); a number not already written as text follows ``display.num``."""
+    cut off); a number not already written as text follows ``display.num``.
+
+    Drawn as one HTML element (:func:`table_html`): the browser redraws it far faster on every
+    rerun than a data table, and the server sends it without a data-frame conversion.
+    """
     del key  # static tables keep no state
-    if not df.empty:
-        df = df.map(_cell)
-        if "verdict" in df.columns:
-            df = df.assign(verdict=[VERDICT_MD.get(v, v) for v in df["verdict"]])
-    st.table(df, hide_index=True)
+    if df.empty:
+        return
+    st.html(table_html(df))
 
 
 #: Rows of a long table shown before the rest folds into an expander.
@@ -332,6 +386,23 @@ def warnings_box(messages: Iterable[str]) -> None:
     msgs = list(messages)
     if msgs:
         st.warning("Outside a method's range of validity:\n\n" + "\n".join(f"- {esc(m)}" for m in msgs))
+
+
+#: Width of one metric card in a row of figures [px]: three fit the results column of a page.
+CARD_WIDTH = 165
+
+
+def figures(cards: Sequence[tuple[str, str] | tuple[str, str, str | None]],
+            width: int = CARD_WIDTH) -> None:
+    """Metric cards ``(label, value[, help])`` in one row that wraps to the page width.
+
+    One container instead of a row of columns per three cards: the browser redraws far fewer
+    elements on every rerun, and a long label or value wraps instead of being cut off.
+    """
+    row = st.container(horizontal=True, wrap=True, gap="small")
+    for card in cards:
+        label, value, *rest = card
+        row.metric(label, value, help=rest[0] if rest else None, width=width)
 
 
 def kv_table(rows: Mapping[str, str] | Sequence[tuple[str, str]], key: str | None = None) -> None:

@@ -8,12 +8,13 @@ from fitcheck import fits
 from fitcheck.errors import InputError
 from fitcheck.ui import unitsys
 from fitcheck.ui.widgets import esc
+from tests.app.shown import tables
 
 PAGE = "fit_limits"
 
 
 def _limits(at):
-    return next(d.value for d in [*at.dataframe, *at.table] if "limit" in d.value.columns)
+    return next(d for d in tables(at) if "limit" in d.columns)
 
 
 def _metrics(at):

@@ -22,6 +22,7 @@ from fitcheck.search import search_bearing_seat, search_fits
 from fitcheck.study import StudySettings, run_study
 from fitcheck.ui import unitsys
 from fitcheck.ui.widgets import esc
+from tests.app.shown import layer_rows, tables
 
 PAGE = "lot_study"
 PF = "gear-on-shaft"
@@ -43,15 +44,15 @@ def metrics(at) -> dict:
 
 def _frame_by_columns(at, column: str):
     """The first table of the page that has ``column``."""
-    return next(d.value for d in [*at.dataframe, *at.table] if column in d.value.columns)
+    return next(d for d in tables(at) if column in d.columns)
 
 
 def _long_frame(at, column: str, keep=lambda df: True):
     """A long table shown in parts (its first rows, the rest folded below), joined again."""
     import pandas as pd
 
-    parts = [d.value for d in [*at.dataframe, *at.table] if column in d.value.columns
-             and keep(d.value)]
+    parts = [d for d in tables(at) if column in d.columns
+             and keep(d)]
     return pd.concat(parts, ignore_index=True)
 
 
@@ -110,7 +111,7 @@ def test_run_study_shows_the_library_result(app_test):
     hist, spec = chart_frame(at.get("vega_lite_chart")[0])
     assert list(hist["count"]) == list(d.hist_counts)
     assert hist["lo"].to_numpy() == pytest.approx(d.hist_edges[:-1])
-    rules = [v["v"] for layer in spec["layer"] if "data" in layer for v in layer["data"]["values"]]
+    rules = [v["v"] for rows in layer_rows(at.get("vega_lite_chart")[0]) for v in rows]
     assert rules == pytest.approx([v for _, v in d.limits])
 
 

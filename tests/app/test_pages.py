@@ -16,6 +16,7 @@ from fitcheck import case as casefile
 from fitcheck import tomlwrite
 from fitcheck.ui import app, state, unitsys
 from fitcheck.ui.widgets import esc
+from tests.app.shown import layer_rows, open_groups, tables
 
 PAGES = [p.module for p in app.PAGES]
 
@@ -70,7 +71,7 @@ def test_press_fit_shows_the_library_results(app_test):
     assert m["Torque required"] == unitsys.show(r.torque, "torque", "SI")
     assert m["Pressure, tightest"] == unitsys.show(r.pressure_max, "stress", "SI")
     assert m["Slip safety, loosest"] == unitsys.num(r.slip_safety_min, 3)
-    checks = next(d.value for d in [*at.dataframe, *at.table] if "check" in d.value.columns)
+    checks = next(d for d in tables(at) if "check" in d.columns)
     assert list(checks["check"]) == [c.name for c in r.checks]
     capacity, wall = (chart_data(c) for c in at.get("vega_lite_chart"))
     band = r.capacity_band()
@@ -89,7 +90,8 @@ def chart_data(el):
 
     frame = pa.ipc.open_stream(el.proto.data.data).read_pandas()
     spec = json.loads(el.proto.spec)
-    rules = [v["v"] for layer in spec["layer"] if "data" in layer for v in layer["data"]["values"]]
+    del spec
+    rules = [v["v"] for rows in layer_rows(el) for v in rows]
     return frame, rules
 
 
@@ -163,6 +165,7 @@ def test_bearing_page_other_joint_and_suggested_seats(app_test):
     if use:  # the demo's choice differs from the suggestion
         use[0].click().run()
         assert not at.exception
+        open_groups(at, "bearing_seat")  # a closed input group draws no widgets
         assert at.text_input(key="br.B-side-6002.shaft").value == rec.shaft
         assert at.text_input(key="br.B-side-6002.housing").value == rec.housing
 
@@ -195,7 +198,7 @@ def test_screw_page_shows_the_library_results(app_test):
 
 
 def test_screw_change_and_bad_thread(app_test):
-    at = app_test("housing_screws")
+    at = open_groups(app_test("housing_screws"), "housing_screws")
     at.text_input(key=f"sc.{SC}.count").set_value("6").run()
     assert not at.exception
     doc = demo_doc()
@@ -228,8 +231,8 @@ def test_case_verdict_lists_every_check_worst_first(app_test):
     assert m["Joints"] == str(len(res.joints))
     assert m["Checks"] == str(len(res.checks))
     assert m["Failing checks"] == str(sum(not c.passed for c in res.checks))
-    table = next(d.value for d in [*at.dataframe, *at.table] if "joint" in d.value.columns
-                 and "check" in d.value.columns)
+    table = next(d for d in tables(at) if "joint" in d.columns
+                 and "check" in d.columns)
     ordered = res.by_margin()
     assert list(table["check"]) == [c.check.name for c in ordered]
     assert list(table["joint"]) == [c.label for c in ordered]

@@ -7,12 +7,13 @@ import tomllib
 from fitcheck import case as casefile
 from fitcheck import tomlwrite
 from fitcheck.ui import unitsys
+from tests.app.shown import open_groups
 
 PF = "gear-on-shaft"
 
 
 def test_elastic_plastic_choice_shows_the_library_plastic_zone(app_test):
-    at = app_test("press_fit")
+    at = open_groups(app_test("press_fit"), "press_fit")  # the group "Design" opens
     assert "Plastic zone, Ø" not in {m.label for m in at.metric}
     at.selectbox(key=f"pf.{PF}.design").set_value("elastic-plastic").run()
     assert not at.exception

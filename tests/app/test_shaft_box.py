@@ -6,6 +6,7 @@ import tomllib
 
 from fitcheck import case as casefile
 from fitcheck import display
+from tests.app.shown import tables
 
 
 def _result(table: str, name: str):
@@ -25,8 +26,8 @@ def test_press_fit_page_shows_the_shaft_safeties(app_test):
     assert m["Fatigue safety"] == display.num(sh.fatigue_safety, 3)
     assert m["Yield safety"] == display.num(sh.static_safety, 3)
     assert m["Notch factor βσ"] == display.num(sh.notch_factor_bending, 3)
-    tables = [t.value for t in list(at.dataframe) + list(at.get("table"))]
-    loads = next(t for t in tables if "quantity" in t.columns and "loads from" in list(t["quantity"]))
+    shown = tables(at)
+    loads = next(t for t in shown if "quantity" in t.columns and "loads from" in list(t["quantity"]))
     assert display.show(sh.bending_moment, "torque", "SI") in list(loads["value"])
 
 

@@ -19,6 +19,8 @@ from fitcheck import case as casefile
 from fitcheck.search import search_fits
 from fitcheck.ui import state, unitsys
 from fitcheck.ui.widgets import esc
+from tests.app.shown import chart
+from tests.app.shown import tables as tables_of
 
 PF = "gear-on-shaft"
 #: a displayed number: no e-notation, no "-0", no unit spelt as pint writes it
@@ -146,8 +148,8 @@ def test_press_fit_headline_equals_the_library_and_the_table(app_test):
     m = metrics(at)
     assert m["Press-in force, largest"] == unitsys.show(r.press_force_max, "force", "SI")
     assert m["Hub heating temperature"] == unitsys.show_in(r.shrink_temperature_C, "degC", "SI")
-    cases = next(d.value for d in [*at.dataframe, *at.table]
-                 if "loosest, operating" in d.value.columns)
+    cases = next(d for d in tables_of(at)
+                 if "loosest, operating" in d.columns)
     # the headline is the governing (loosest) operating state's and equals that column of the table
     column = "loosest, governing state"
     row = dict(zip(cases["quantity"], cases[column], strict=True))
@@ -161,8 +163,8 @@ def test_press_fit_headline_equals_the_library_and_the_table(app_test):
 def _shown(at) -> list[str]:
     """Every metric, table cell and banner text of the page."""
     shown = [m.value for m in at.metric] + [m.label for m in at.metric]
-    for t in [*at.dataframe, *at.table]:
-        shown += [str(v) for v in t.value.to_numpy().ravel()]
+    for t in tables_of(at):
+        shown += [str(v) for v in t.to_numpy().ravel()]
     shown += [e.value for e in [*at.error, *at.success, *at.caption, *at.subheader]]
     return shown
 
@@ -244,7 +246,7 @@ def test_case_verdict_tables_equal_the_library(app_test):
     doc = failing_bearing_doc()
     at = app_test("whole_case", query=addr(doc))
     res = casefile.evaluate(casefile.loads(tomlwrite.dumps(doc)))
-    tables = [t.value for t in at.table]
+    tables = tables_of(at)
     joints_t = next(t for t in tables if "weakest check" in t.columns)
     checks_t = next(t for t in tables if "reference" in t.columns and "joint" in t.columns)
     assert len(checks_t) == sum(len(j.checks) for j in res.joints)
@@ -269,7 +271,7 @@ def test_the_admitted_letters_change_the_search_as_the_library(app_test):
     inp = casefile.loads(tomlwrite.dumps(demo_doc())).pressfits[0]
     r = search_fits(inp, shaft_letters=("p", "r", "s"), hole_letters=("S",))
     assert any(f"{len(r.passing)} of {r.evaluated} fits" in s.value for s in at.subheader)
-    shown = [t.value for t in at.table if "rank" in t.value.columns]
+    shown = [t for t in tables_of(at) if "rank" in t.columns]
     fits_shown = [f for t in shown for f in t["fit"]]
     assert fits_shown == [f"{c.hole}/{c.shaft}" for c in r.passing]
     for f in fits_shown:
@@ -280,7 +282,7 @@ def test_the_admitted_letters_change_the_search_as_the_library(app_test):
     first = shown[0].iloc[0]
     assert first["slip safety, loosest"] == unitsys.num(r.best.slip_safety_min, 3)
     assert first["hub yield safety"] == unitsys.num(r.best.hub_yield_safety, 3)
-    rejected = next(t.value for t in at.table if "fails (margin)" in t.value.columns)
+    rejected = next(t for t in tables_of(at) if "fails (margin)" in t.columns)
     for (_, row), c in zip(rejected.iterrows(), r.rejected, strict=False):
         assert row["fit"] == f"{c.hole}/{c.shaft}"
         for n, m in c.failing:  # the whole text of every failing check, not cut
@@ -337,10 +339,11 @@ def test_reference_lines_are_named_in_the_legend_not_over_each_other(app_test, p
     assert not at.exception
     named = 0
     for el in at.get("vega_lite_chart"):
-        spec = json.loads(el.proto.spec)
+        _, spec, named_data = chart(el)
         assert not _text_on_lines(spec), el.proto.spec[:300]
         for layer in _rule_layers(spec):
-            names = [v["t"] for v in layer["data"]["values"]]
+            # the values travel as a named dataset: the spec stays the same when a value changes
+            names = list(named_data[layer["data"]["name"]]["t"])
             dash = layer["encoding"]["strokeDash"]
             assert set(names) <= set(dash["scale"]["domain"])  # every line named in the legend
             assert dash["legend"] is not None
