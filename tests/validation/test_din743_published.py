@@ -15,8 +15,22 @@ Sources read, and what each one confirms:
 * Lecture notes "Maschinenelemente — Wellen", chapter "Festigkeitsnachweis", Einführung
   (inggo.com, teachnet; the notes' preface names DIN 743:2000-10, the edition before 2012):
   DIN 743 is limited to steel; temperature range −40 °C … 150 °C; corrosion-free surroundings;
-  tension/compression, bending and torsion, alone or combined. That the 2012 edition keeps this
-  scope is from memory.
+  tension/compression, bending and torsion, alone or combined.
+* DIN 743-1:2012-12, scope as published with the standard's entry at standards.globalspec.com
+  (std/9957550, "DIN 743-1 … Part 1: General", publication date 1 December 2012, 25 pages):
+  "The scope of this standard is limited to steel. Welded components are to be considered
+  separately, and this standard does not apply to them"; residual stresses are not explicitly
+  considered (for hard surfaces they enter globally through the sensitivity factor n and K_V).
+  So the 2012 edition keeps the limitation to steel; its temperature range is not in that text
+  and stays from memory for 2012.
+* Exercise slides "Übung Maschinenelemente — Achsen und Wellen: Tragfähigkeitsnachweis nach
+  DIN 743", Stephan Voigt, M.Eng., Hochschule Anhalt (public copy on de.scribd.com, document
+  401536256; the edition of DIN 743 is not named in the part that could be read), section 1.1
+  "Anwendungsbereich": steel shafts and axles (not welded); −40 °C ≤ ϑ ≤ 150 °C; rotating and
+  plane bending are not distinguished; corrosion-free media; the amplitudes of tension/
+  compression, bending and torsion are taken as acting at the same time (in phase); limiting
+  number of cycles of the fatigue strengths N_G = 10⁷. Its worked example (section 7) could
+  not be read.
 * FKM research report no. 325 (2015, project 294 II), "Untersuchungen zum Größeneinfluss auf
   die Gestaltfestigkeit / Kerbwirkungszahlen von Welle-Nabe-Verbindungen", publisher's
   abstract (VDMA shop page): the notch factors of press fits rest on rotating-bending tests at
@@ -24,7 +38,13 @@ Sources read, and what each one confirms:
   back-calculate notch factors that agree with DIN 743's conversion to other diameters by K3.
 
 What could not be read: no worked example of a shaft under a press-fitted hub checked after
-DIN 743 (DIN 743 Beiblatt 1:2012 is not openly available; of the machine-elements textbooks
+DIN 743. The standard's own supplement has none: DIN 743 Beiblatt 1:2000-10 (contents read in a
+public English copy, scribd.com document 512797066, whose translation says "corrugated shaft" and
+"spring slot" for shouldered shaft and keyway) has worked examples of 4.1 a shouldered shaft in
+bending and torsion, 4.2 a shaft with a keyway in rotating bending and static torsion, 4.3 an axle
+with a shoulder and an undercut in bending; the 2012 edition (DIN's product page for DIN 743 Beiblatt 1,
+din.de, wdc-beuth:din21:145487776) only replaces 4.3 by an axle with a retaining-ring groove.
+(Beiblatt 1:2012 itself is not openly available; of the machine-elements textbooks
 found — Roloff/Matek 16th and 21st ed., Decker "Tabellen und Diagramme" 18th ed.,
 Steinhilper/Röper vol. 3 2nd ed. — only front matter and contents were readable; the 2008
 draft E DIN 743-1 only up to its contents). The press-fit notch factor βσ = 2.7·(σ_B/1000)^0.43,
@@ -100,14 +120,16 @@ def _temperature_warned(temperature):
 @pytest.mark.parametrize("t, outside", [(-41.0, True), (-40.0, False), (20.0, False),
                                         (150.0, False), (151.0, True)])
 def test_temperature_range_of_din743(t, outside):
-    # lecture notes "Maschinenelemente — Wellen", Festigkeitsnachweis, Einführung (inggo.com):
-    # DIN 743 applies from −40 °C to 150 °C
+    # lecture notes "Maschinenelemente — Wellen", Festigkeitsnachweis, Einführung (inggo.com), and
+    # exercise slides "Achsen und Wellen: Tragfähigkeitsnachweis nach DIN 743" (Hochschule Anhalt),
+    # section 1.1: DIN 743 applies from −40 °C to 150 °C
     assert bool(din743.validity(30.0, 700.0, t)["temperature"]) is outside
     assert _temperature_warned(t) is outside
 
 
 def test_din743_is_limited_to_steel():
-    # lecture notes "Maschinenelemente — Wellen" (inggo.com): DIN 743 is limited to steel. A shaft of
+    # lecture notes "Maschinenelemente — Wellen" (inggo.com), and DIN 743-1:2012-12 scope as published
+    # (standards.globalspec.com, std/9957550): DIN 743 is limited to steel. A shaft of
     # a non-steel material without its own fatigue strengths is not checked, and both checks fail.
     alu = materials.get("EN AW-6082-T6")
     r = evaluate_seat(d=20.0, di=0.0, material=alu, rz_um=4.0,

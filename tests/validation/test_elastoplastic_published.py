@@ -31,6 +31,20 @@ belong to calculation programs and are not used). fitcheck keeps the permitted e
 the hub wall thickness (from memory). One secondary description reads the limit as about 30 % of
 the ring *area*; the last test shows that the wall-thickness share is never smaller than the
 area share, so fitcheck's reading fails a hub no later than the area reading would.
+
+Read since (contents only): DIN 7190:2001-02, Interference fits — Calculation and design rules,
+in a public machine-translated English copy (ja.scribd.com, document 380670449, 43 pages). Its
+contents list 4.2 the purely elastic design and 4.3 the elastic-plastic design, each with
+"computing course 1" for a given joint pressure p and "computing course 2" for a given
+interference; informative Annex A, "computation of examples"; informative Annex B, a "procedure
+for iterative computation of the dimensionless plasticity of diameter z" (the translation's
+words; read: the relative plastic diameter ζ). So the standard parameterises the partly plastic
+hub by a relative plastic diameter (fitcheck's ζ = D_pl/d; that the standard's ζ is this ratio is
+from memory until the clause is read) and solves for it iteratively for a given interference
+(fitcheck: Newton's method in x = ζ²). Annex A has worked examples of its own — which of the two
+designs they cover could not be seen; it is the source to read for a published check once a copy
+is at hand. The text of 4.3, the permitted extent of the plastic zone and Annex A's numbers could
+not be read.
 """
 
 from __future__ import annotations
