@@ -35,7 +35,8 @@ from .materials import Material
 from .units import number, to_core
 
 __all__ = ["BEARING_KEYS", "METHOD_NOTES", "PRESSFIT_KEYS", "ShaftLoads", "ShaftSeatResult",
-           "TORQUE_TYPES", "evaluate_seat", "json_fields", "mesh_forces", "seat_moment"]
+           "TORQUE_TYPES", "evaluate_seat", "headline_sentence", "is_shaft_check", "json_fields",
+           "mesh_forces", "seat_moment"]
 
 TORQUE_TYPES = ("static", "pulsating", "alternating")
 NAME_FATIGUE = "shaft fatigue at the hub edge"
@@ -370,6 +371,30 @@ def json_fields(res: ShaftSeatResult | None) -> dict:
     return clean({"shaft_fatigue_safety": res.fatigue_safety, "shaft_static_safety": res.static_safety,
                   "notch_factor_bending": res.notch_factor_bending,
                   "notch_factor_torsion": res.notch_factor_torsion, "shaft_seat": res.to_dict()})
+
+
+def is_shaft_check(check: Check) -> bool:
+    """True for the two checks this module adds ("shaft fatigue/yield at the hub edge")."""
+    return check.name in (NAME_FATIGUE, NAME_YIELD)
+
+
+def headline_sentence(check: Check) -> str:
+    """The verdict's sentence for a failing shaft check: what fails, by how much, and what helps.
+
+    >>> c = Check(NAME_FATIGUE, 0.9, 1.2, ">=", "", REF_FATIGUE, "")
+    >>> headline_sentence(c)[:63]
+    'Shaft fatigue at the hub edge: safety 0.9 < 1.2 required (DIN 7'
+    """
+    if not math.isfinite(check.value):
+        return (f"The {check.name} is not checked (the shaft material is outside DIN 743). Next: a steel "
+                "shaft, or the shaft material's fatigue strengths (sigma_bW, tau_tW, sigma_zdW) inline")
+    if check.name == NAME_FATIGUE:
+        return (f"Shaft fatigue at the hub edge: safety {check.value:.3g} < {check.limit:g} required "
+                "(DIN 743). Next: a larger shaft diameter, a stronger or surface-hardened shaft seat "
+                "(surface_hardening_factor), a smaller bending moment at the seat (supports closer to "
+                "the load) or a smaller load")
+    return (f"Shaft yield at the hub edge under the largest loads: safety {check.value:.3g} < "
+            f"{check.limit:g} required (DIN 743). Next: a larger or stronger shaft, or a smaller peak load")
 
 
 def _applies(m: Material) -> bool:

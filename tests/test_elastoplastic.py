@@ -230,3 +230,17 @@ def test_outer_diameter_growth_of_a_yielded_hub():
     assert r.hub_outer_growth_max == pytest.approx(30.0 * k * (r.plastic_zone_diameter / 30.0) ** 2 / 70000.0)
     sr, st = ep.hub_stresses(r.pressure_max, r.plastic_zone_diameter, 20.0, 30.0, 15.0, 260.0)
     assert r.hub_outer_growth_max == pytest.approx(30.0 * st / 70000.0, rel=1e-9)
+
+
+def test_passing_elastic_plastic_headline_states_the_plastic_zone_not_an_elastic_yield_safety():
+    # a partly yielding hub has an elastic "yield safety" below 1 by design: the verdict quotes the
+    # plastic zone's share of the wall against its permitted share instead
+    inp = PressFitInput.from_mapping({
+        "name": "ep", "diameter": "20 mm", "interference_min": "40 um", "interference_max": "75 um",
+        "length": "16 mm", "hub_outer_diameter": "30 mm", "shaft_material": "42CrMo4",
+        "hub_material": "C45E", "torque": "25 N*m", "design": "elastic-plastic"})
+    r = evaluate(inp)
+    zone = next(c for c in r.checks if c.name == "hub plastic zone at tightest fit")
+    assert r.ok and zone.value > 0 and r.hub_yield_safety < 1.0
+    assert f"hub plastic zone {zone.value:.0%} of the wall (permitted 30%)" in r.headline
+    assert "hub yield safety" not in r.headline

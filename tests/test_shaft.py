@@ -181,3 +181,31 @@ def test_materials_carry_din743_strengths():
     assert (m.sigma_zdW, m.sigma_bW, m.tau_tW, m.dB, m.din743_group) == (280.0, 350.0, 210.0, 16.0, "QT")
     mod = materials.from_mapping({"base": "C45E", "Rm": "800 MPa"})
     assert math.isnan(mod.sigma_bW)  # a changed Rm drops the tabulated fatigue strengths
+
+
+def test_failing_shaft_checks_get_their_own_verdict_sentence():
+    # the verdict of a failing shaft check names the check and the safeties and advises on the shaft,
+    # not on the press or the seat's axial location (which do not change the shaft's fatigue safety)
+    r = pressfit.evaluate(pressfit.PressFitInput.from_mapping({**GEAR, "bending_moment": "400 N*m"}))
+    fat = next(c for c in r.checks if c.name == "shaft fatigue at the hub edge")
+    assert not fat.passed
+    assert f"Shaft fatigue at the hub edge: safety {fat.value:.3g} < 1.2 required" in r.headline
+    assert "press" not in r.headline.split("Shaft fatigue")[1] and "exceeds" not in r.headline
+    b = bearings.evaluate(bearings.BearingSeatInput.from_mapping(
+        {"designation": "6204", "shaft": "k5", "housing": "H7", "bending_moment": "150 N*m"}))
+    bfat = next(c for c in b.checks if c.name == "shaft fatigue at the hub edge")
+    assert not bfat.passed and "Shaft fatigue at the hub edge: safety" in b.headline
+    assert "retaining ring" not in b.headline
+    y = bearings.evaluate(bearings.BearingSeatInput.from_mapping(
+        {"designation": "6204", "shaft": "k5", "housing": "H7", "bending_moment": "600 N*m",
+         "torque_type": "static"}))
+    assert any(c.name == "shaft yield at the hub edge" and not c.passed for c in y.checks)
+    assert "Shaft yield at the hub edge under the largest loads" in y.headline
+
+
+def test_non_steel_shaft_verdict_says_not_checked():
+    m = {**GEAR, "shaft_material": "EN AW-7075-T6", "bending_moment": "1 N*m"}
+    with warnings.catch_warnings():
+        warnings.simplefilter("ignore", MethodRangeWarning)
+        r = pressfit.evaluate(pressfit.PressFitInput.from_mapping(m))
+    assert "is not checked" in r.headline and "sigma_bW" in r.headline
