@@ -405,3 +405,36 @@ def test_charts_of_a_plastic_hub_and_an_opening_joint(demo_result):
         joint = chart.layout(charts.joint_diagram(sj, system))
         assert any(op[3].startswith("opening at FAab = ") for op in joint.ops if op[0] == "text")
         assert "<svg" in chart.to_svg(joint) and chart.to_drawing(walls, 300.0).width == 300.0
+
+
+def test_gear_seat_inputs_are_named_in_words_and_angles_in_degrees():
+    # the input table of an elastic-plastic gear seat with derived shaft loads: every key in words
+    # (no name cut at a parenthesis or a colon of its description), angles as a drawing gives them
+    text = """format_version = 1
+[[pressfit]]
+name = "g"
+diameter = "20 mm"
+interference_min = "40 um"
+interference_max = "75 um"
+length = "16 mm"
+module = "1.5 mm"
+teeth = 22
+helix_angle = "15 deg"
+bearing_distance_a = "15 mm"
+bearing_distance_b = "45 mm"
+shaft_material = "42CrMo4"
+hub_material = "C45E"
+torque = "25 N*m"
+design = "elastic-plastic"
+plastic_zone_limit = 0.25
+"""
+    rep = report.build(case_mod.evaluate(case_mod.loads(text)), plots=False)
+    rows = {r.name: r.value for s in rep.sections for r in s.inputs}
+    assert rows["normal module of the gear m"] == "1.5 mm"
+    assert rows["permitted plastic-zone share of the hub wall"] == "0.25"
+    assert rows["design of the press fit"] == "elastic-plastic"
+    assert rows["helix angle β of the gear"] == "15°"
+    assert "gear m" not in rows and "elastic-plastic design" not in rows
+    page = html.unescape(report.to_html(rep))
+    assert "at most permitted plastic-zone share of the hub wall" in page
+    assert "fretting fatigue of the shaft" not in page  # it is checked now (DIN 743)
