@@ -209,3 +209,49 @@ def test_non_steel_shaft_verdict_says_not_checked():
         warnings.simplefilter("ignore", MethodRangeWarning)
         r = pressfit.evaluate(pressfit.PressFitInput.from_mapping(m))
     assert "is not checked" in r.headline and "sigma_bW" in r.headline
+
+
+_GEAR_TOML = """format_version = 1
+[[pressfit]]
+name = "g"
+fit = "25 H7/s6"
+length = "20 mm"
+module = "2 mm"
+teeth = 40
+shaft_material = "C45E"
+hub_material = "C45E"
+torque = "60 N*m"
+"""
+
+
+@pytest.mark.parametrize("line, field, shown, allowed", [
+    ('module = "-2 mm"', "pressfit[g].module", "'-2 mm'", "a length > 0 mm"),
+    ('helix_angle = "95 deg"', "pressfit[g].helix_angle", "'95 deg'", "an angle >= 0 deg and <= 45 deg"),
+    ('pressure_angle = "50 deg"', "pressfit[g].pressure_angle", "'50 deg'", "an angle >= 10 deg and <= 35 deg"),
+    ('design = "plastic"', "pressfit[g].design", "'plastic'", "'elastic' or 'elastic-plastic'"),
+    ('bending_moment = "abc"', "pressfit[g].bending_moment", "'abc'", "a torque, e.g. '30 N*m'"),
+    ('bending_moment = "5 m"', "pressfit[g].bending_moment", "'5 m'", "a torque, e.g. '30 N*m'"),
+    ('application_factor = "abc"', "pressfit[g].application_factor", "'abc'", "a number, e.g. '1.25'"),
+    ('torque_type = "pulsing"', "pressfit[g].torque_type", "'pulsing'", "'static', 'pulsating' or 'alternating'"),
+    ('mean_stress_case = 3', "pressfit[g].mean_stress_case", "3", "1 (constant mean stress) or 2"),
+    ('fatigue_safety = 0.5', "pressfit[g].fatigue_safety", "0.5", "a number >= 1 and <= 20"),
+])
+def test_bad_shaft_and_gear_keys_exit_2_naming_field_value_and_what_is_allowed(cli, tmp_path, line, field,
+                                                                                shown, allowed):
+    f = tmp_path / "bad.toml"
+    key = line.split(" = ")[0]
+    lines = [ln for ln in _GEAR_TOML.splitlines() if not ln.startswith(key + " = ")] + [line]
+    f.write_text("\n".join(lines) + "\n", encoding="utf-8")
+    for cmd in ("pressfit", "check"):
+        code, out, err = cli(cmd, str(f))
+        assert code == 2 and "Traceback" not in err
+        msg = next(ln for ln in err.splitlines() if field in ln)
+        assert f"{field}: got {shown}; allowed: {allowed}" in msg
+        assert sum(field + ":" in ln for ln in err.splitlines()) == 1  # each problem listed once
+
+
+def test_bad_shaft_loads_on_the_bearing_command_line(cli):
+    code, out, err = cli("bearing", "6204", "--bending-moment", "abc")
+    assert code == 2 and "bending_moment: got 'abc'; allowed: a torque" in err and "Traceback" not in err
+    code, out, err = cli("bearing", "6204", "--torque-type", "pulsing")
+    assert code == 2 and "torque_type" in err and "did you mean 'pulsating'" in err
