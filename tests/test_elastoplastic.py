@@ -244,3 +244,17 @@ def test_passing_elastic_plastic_headline_states_the_plastic_zone_not_an_elastic
     assert r.ok and zone.value > 0 and r.hub_yield_safety < 1.0
     assert f"hub plastic zone {zone.value:.0%} of the wall (permitted 30%)" in r.headline
     assert "hub yield safety" not in r.headline
+
+
+def test_study_names_the_yield_limit_state_of_the_chosen_design():
+    from fitcheck.study import run_study
+
+    m = dict(ALU_GEAR, interference_min="70 um", interference_max="100 um", design="elastic-plastic")
+    with warnings.catch_warnings():
+        warnings.simplefilter("ignore")
+        pl = run_study(PressFitInput.from_mapping(m), samples=2000, seed=1, importance_samples=0)
+        el = run_study(PressFitInput.from_mapping(dict(m, design="elastic")), samples=2000, seed=1,
+                       importance_samples=0)
+    assert "hub plastic through its whole wall" in pl.yield_.definition
+    assert "hub bore" not in pl.yield_.definition
+    assert el.yield_.definition.startswith("equivalent stress at hub bore")
