@@ -258,3 +258,24 @@ def test_study_names_the_yield_limit_state_of_the_chosen_design():
     assert "hub plastic through its whole wall" in pl.yield_.definition
     assert "hub bore" not in pl.yield_.definition
     assert el.yield_.definition.startswith("equivalent stress at hub bore")
+
+
+def test_search_table_shows_the_plastic_zone_share_in_the_elastic_plastic_design(cli, tmp_path):
+    m = {k: v for k, v in ALU_GEAR.items() if not k.startswith("interference") and k != "diameter"}
+    m |= {"fit": "20 H7/x6", "design": "elastic-plastic"}
+    f = tmp_path / "alu.toml"
+    f.write_text("\n".join(["format_version = 1", "[[pressfit]]"] + [f'{k} = "{v}"' for k, v in m.items()])
+                 + "\n", encoding="utf-8")
+    code, out, err = cli("search", str(f), "--holes", "H7", "--shaft-grades", "6", "--top", "3")
+    assert "hub plastic zone (share of wall)" in out and "hub safety" not in out
+    from fitcheck.search import search_fits
+    with warnings.catch_warnings():
+        warnings.simplefilter("ignore")
+        best = search_fits(PressFitInput.from_mapping(m), holes=("H7",), shaft_grades=(6,)).passing[0]
+    share = next(c.value for c in best.checks if c.name == "hub plastic zone at tightest fit")
+    row = next(ln for ln in out.splitlines() if ln.startswith("1 "))
+    assert f" {share:.0%} " in row
+    f.write_text(f.read_text(encoding="utf-8").replace('"elastic-plastic"', '"elastic"')
+                 .replace('"15 N*m"', '"2 N*m"'), encoding="utf-8")
+    code, out, err = cli("search", str(f), "--holes", "H7", "--shaft-grades", "6", "--top", "3")
+    assert "hub safety" in out and "plastic zone" not in out
