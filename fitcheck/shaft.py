@@ -379,15 +379,18 @@ def is_shaft_check(check: Check) -> bool:
 
 
 def headline_sentence(check: Check) -> str:
-    """The verdict's sentence for a failing shaft check: what fails, by how much, and what helps.
+    """The verdict's sentence for a failing shaft check: what fails, by how much, and what helps
+    ("" for the yield check of a shaft DIN 743 does not cover: the fatigue check's sentence says it).
 
     >>> c = Check(NAME_FATIGUE, 0.9, 1.2, ">=", "", REF_FATIGUE, "")
     >>> headline_sentence(c)[:63]
     'Shaft fatigue at the hub edge: safety 0.9 < 1.2 required (DIN 7'
     """
-    if not math.isfinite(check.value):
-        return (f"The {check.name} is not checked (the shaft material is outside DIN 743). Next: a steel "
-                "shaft, or the shaft material's fatigue strengths (sigma_bW, tau_tW, sigma_zdW) inline")
+    if not math.isfinite(check.value):  # both checks refused: one sentence, on the fatigue check
+        return ("" if check.name == NAME_YIELD else
+                "The shaft at the hub edge is not checked for fatigue and yield (the shaft material is "
+                "outside DIN 743). Next: a steel shaft, or the shaft material's fatigue strengths "
+                "(sigma_bW, tau_tW, sigma_zdW) inline")
     if check.name == NAME_FATIGUE:
         return (f"Shaft fatigue at the hub edge: safety {check.value:.3g} < {check.limit:g} required "
                 "(DIN 743). Next: a larger shaft diameter, a stronger or surface-hardened shaft seat "

@@ -396,7 +396,7 @@ def _headline(checks, r, state_lo, state_tight, state_shaft, state_loose, why_ze
                    "Next: a tighter fit or a thicker hub")
     for c in checks[4:]:
         if not c.passed and _shaft.is_shaft_check(c):
-            out.append(_shaft.headline_sentence(c))
+            out += [x for x in (_shaft.headline_sentence(c),) if x]
         elif not c.passed:
             out.append(f"{c.name[0].upper()}{c.name[1:]} {c.value:.4g} {c.unit} exceeds {c.limit:.4g} "
                        f"{c.unit}. Next: {'cool the shaft or a looser fit' if 'heating' in c.name else 'a stronger press or a looser fit'}")
