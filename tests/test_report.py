@@ -438,3 +438,18 @@ plastic_zone_limit = 0.25
     page = html.unescape(report.to_html(rep))
     assert "at most permitted plastic-zone share of the hub wall" in page
     assert "fretting fatigue of the shaft" not in page  # it is checked now (DIN 743)
+
+
+def test_inch_report_gives_the_shaft_loads_and_check_notes_in_inch_units(demo_result):
+    # the loads the shaft check used (M, T, F, mesh forces) read in the case's system, as the CLI's
+    # --units inch prints them; the demo gear: M = 1.497 N·m, T = 3.2 N·m, F = 60 N
+    # (1 lbf·in = 0.112984829 N·m, 1 lbf = 4.4482216 N: NIST SP 811)
+    rep = report.build(demo_result, plots=False, system="inch")
+    gear = rep.sections[0]
+    loads = next(n for n in gear.notes if n.startswith("shaft loads at the hub edge"))
+    assert "M = 13.25 lbf·in" in loads and "T = 28.32 lbf·in pulsating" in loads and "F = 13.49 lbf" in loads
+    assert "N·m" not in loads and " N," not in loads
+    fat = next(r for r in gear.checks if r.name == "shaft fatigue at the hub edge")
+    assert "ksi" in fat.note and "MPa" not in fat.note
+    si = report.build(demo_result, plots=False, system="SI").sections[0]
+    assert any("M = 1.497 N·m" in n for n in si.notes)
