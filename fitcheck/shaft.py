@@ -392,11 +392,11 @@ def headline_sentence(check: Check) -> str:
                 "outside DIN 743). Next: a steel shaft, or the shaft material's fatigue strengths "
                 "(sigma_bW, tau_tW, sigma_zdW) inline")
     if check.name == NAME_FATIGUE:
-        return (f"Shaft fatigue at the hub edge: safety {check.value:.3g} < {check.limit:g} required "
+        return (f"Shaft fatigue at the hub edge: safety {check.value:.4g} < {check.limit:g} required "
                 "(DIN 743). Next: a larger shaft diameter, a stronger or surface-hardened shaft seat "
                 "(surface_hardening_factor), a smaller bending moment at the seat (supports closer to "
                 "the load) or a smaller load")
-    return (f"Shaft yield at the hub edge under the largest loads: safety {check.value:.3g} < "
+    return (f"Shaft yield at the hub edge under the largest loads: safety {check.value:.4g} < "
             f"{check.limit:g} required (DIN 743). Next: a larger or stronger shaft, or a smaller peak load")
 
 

@@ -189,7 +189,7 @@ def test_failing_shaft_checks_get_their_own_verdict_sentence():
     r = pressfit.evaluate(pressfit.PressFitInput.from_mapping({**GEAR, "bending_moment": "400 N*m"}))
     fat = next(c for c in r.checks if c.name == "shaft fatigue at the hub edge")
     assert not fat.passed
-    assert f"Shaft fatigue at the hub edge: safety {fat.value:.3g} < 1.2 required" in r.headline
+    assert f"Shaft fatigue at the hub edge: safety {fat.value:.4g} < 1.2 required" in r.headline
     assert "press" not in r.headline.split("Shaft fatigue")[1] and "exceeds" not in r.headline
     b = bearings.evaluate(bearings.BearingSeatInput.from_mapping(
         {"designation": "6204", "shaft": "k5", "housing": "H7", "bending_moment": "150 N*m"}))
@@ -255,3 +255,8 @@ def test_bad_shaft_loads_on_the_bearing_command_line(cli):
     assert code == 2 and "bending_moment: got 'abc'; allowed: a torque" in err and "Traceback" not in err
     code, out, err = cli("bearing", "6204", "--torque-type", "pulsing")
     assert code == 2 and "torque_type" in err and "did you mean 'pulsating'" in err
+
+
+def test_verdict_sentence_never_rounds_a_failing_safety_up_to_its_limit():
+    c = shaft.Check(shaft.NAME_FATIGUE, 1.198, 1.2, ">=", "", shaft.REF_FATIGUE, "")
+    assert not c.passed and "safety 1.198 < 1.2 required" in shaft.headline_sentence(c)
