@@ -260,3 +260,15 @@ def test_bad_shaft_loads_on_the_bearing_command_line(cli):
 def test_verdict_sentence_never_rounds_a_failing_safety_up_to_its_limit():
     c = shaft.Check(shaft.NAME_FATIGUE, 1.198, 1.2, ">=", "", shaft.REF_FATIGUE, "")
     assert not c.passed and "safety 1.198 < 1.2 required" in shaft.headline_sentence(c)
+
+
+def test_bearing_command_line_sets_the_shaft_check_and_prints_its_loads(cli):
+    # K_A = 1.5 on M = 40 N·m: the shaft check uses 60 N·m; the required fatigue safety is the one given
+    code, out, err = cli("bearing", "6204", "--shaft", "k5", "--housing", "H7", "--bending-moment", "40 N*m",
+                         "--application-factor", "1.5", "--fatigue-safety", "2.5", "--json")
+    j = json.loads(out)
+    assert j["shaft_seat"]["bending_moment"] == pytest.approx(60_000.0)
+    fat = next(c for c in j["checks"] if c["name"] == "shaft fatigue at the hub edge")
+    assert fat["limit"] == 2.5 and fat["passed"] == (j["shaft_fatigue_safety"] >= 2.5)
+    code, out, err = cli("bearing", "6204", "--static-safety", "0.8")
+    assert code == 2 and "static_safety: got '0.8'; allowed: a number >= 1" in err
