@@ -20,7 +20,6 @@ from . import EXIT_FAILED_CHECK, EXIT_OK, print_json, print_table
 from .study import select_joint
 
 COMMAND = "search"
-PLASTIC_CHECK = "hub plastic zone at tightest fit"  # the hub check of the elastic-plastic design
 HELP = ("search the ISO 286 fits of a press fit (or the seat classes of a bearing): rank those "
         "that pass, say why others fail")
 
@@ -105,10 +104,9 @@ def print_search(r, k: int, current: str | None = None, out=None) -> None:
         out.write("Ranked fits (largest minimum slip safety first; * preferred)\n")
         rows = []
         # elastic-plastic design: the hub is judged by its plastic zone, not by an elastic yield safety
-        plastic = any(ch.name == PLASTIC_CHECK for ch in r.passing[0].checks)
+        plastic = r.passing[0].plastic_zone_share is not None
         for c in r.passing[:k]:
-            hub = (f"{next(ch.value for ch in c.checks if ch.name == PLASTIC_CHECK):.0%}" if plastic
-                   else f"{c.hub_yield_safety:.3g}")
+            hub = f"{c.plastic_zone_share:.0%}" if plastic else f"{c.hub_yield_safety:.3g}"
             rows.append([c.rank, _name(c) + ("*" if c.preferred else ""), c.basis,
                          f"{c.interference_min_um:+g} … {c.interference_max_um:+g}",
                          f"{c.slip_safety_min:.3g}", hub,
