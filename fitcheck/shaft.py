@@ -452,6 +452,11 @@ def evaluate_seat(*, d: float, di: float, material: Material, rz_um: float, load
                          "for the shaft check; the slip check uses axial_force as given")
     else:
         M, source = 0.0, "none given"
+        if module is not None and teeth is not None and torque > 0:
+            warns.append("gear hub (module and teeth) without bending_moment, bearing distances or overhang: "
+                         "the shaft check at the hub edge takes no bending moment, although the mesh forces "
+                         "of a loaded gear always bend its seat; give bearing_distance_a and "
+                         "bearing_distance_b (or overhang) to derive it, or bending_moment")
     F = KA * axial_force + fa
     tt = loads.torque_type
     t_mean = {"static": T, "pulsating": T / 2.0, "alternating": 0.0}[tt]

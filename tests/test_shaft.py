@@ -272,3 +272,19 @@ def test_bearing_command_line_sets_the_shaft_check_and_prints_its_loads(cli):
     assert fat["limit"] == 2.5 and fat["passed"] == (j["shaft_fatigue_safety"] >= 2.5)
     code, out, err = cli("bearing", "6204", "--static-safety", "0.8")
     assert code == 2 and "static_safety: got '0.8'; allowed: a number >= 1" in err
+
+
+def test_loaded_gear_seat_without_bending_data_is_warned_about():
+    # a meshing gear always bends its seat: a gear hub (module, teeth) with a torque but neither a
+    # bending moment nor the bearing distances gets M = 0 in the shaft check, and a warning says so
+    with warnings.catch_warnings(record=True) as caught:
+        warnings.simplefilter("always")
+        r = pressfit.evaluate(pressfit.PressFitInput.from_mapping(GEAR))
+    assert r.shaft.bending_moment == 0.0 and r.shaft.load_source == "none given"
+    msg = "without bending_moment, bearing distances or overhang"
+    assert any(msg in w for w in r.warnings) and any(msg in str(w.message) for w in caught)
+    with warnings.catch_warnings():
+        warnings.simplefilter("ignore")
+        for extra in ({"bending_moment": "5 N*m"}, {"bearing_distance_a": "20 mm", "bearing_distance_b": "30 mm"}):
+            r2 = pressfit.evaluate(pressfit.PressFitInput.from_mapping({**GEAR, **extra}))
+            assert not any(msg in w for w in r2.warnings)
