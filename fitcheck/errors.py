@@ -138,8 +138,22 @@ class ErrorCollector:
         self.errors: list[InputError] = []
 
     def add(self, err: InputError | InputErrors, prefix: str = "") -> None:
+        """Collect ``err`` (under ``prefix``); a problem already collected word for word is not
+        listed twice (two parsers may read the same key, e.g. a gear's helix angle).
+
+        >>> c = ErrorCollector()
+        >>> for _ in range(2):
+        ...     c.add(InputError("beta", "95 deg", "an angle <= 45 deg"), "pressfit[g]")
+        >>> [e.message for e in c.errors]
+        ["pressfit[g].beta: got '95 deg'; allowed: an angle <= 45 deg"]
+        """
         items = err.errors if isinstance(err, InputErrors) else [err]
-        self.errors.extend(e.within(prefix) if prefix else e for e in items)
+        seen = {e.message for e in self.errors}
+        for e in items:
+            e = e.within(prefix) if prefix else e
+            if e.message not in seen:
+                seen.add(e.message)
+                self.errors.append(e)
 
     def field(self, prefix: str = ""):
         collector = self

@@ -65,6 +65,7 @@ _CLASS_RE = re.compile(r"^([A-Za-z]{1,2})(\d{1,2})$")
 #: The check names of fitcheck.pressfit, so that verdicts read the same.
 CHECK_NAMES = ("slip at loosest fit", "hub yield at tightest fit", "shaft yield at tightest fit",
                "loosening speed", "hub heating temperature", "press-in force")
+PLASTIC_ZONE_CHECK = "hub plastic zone at tightest fit"  # the hub check of the elastic-plastic design
 
 
 def _grade(cls: str) -> int:
@@ -231,6 +232,12 @@ class Candidate:
     @property
     def worst_margin(self) -> float:
         return min(c.margin for c in self.checks)
+
+    @property
+    def plastic_zone_share(self) -> float | None:
+        """Elastic-plastic design: the hub's plastic zone as a share of its wall at the tightest fit
+        (the value its hub check judges); ``None`` in the elastic design."""
+        return next((c.value for c in self.checks if c.name == PLASTIC_ZONE_CHECK), None)
 
     def to_dict(self) -> dict:
         d = {f.name: getattr(self, f.name) for f in fields(self) if f.name != "checks"}

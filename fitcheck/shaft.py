@@ -35,7 +35,8 @@ from .materials import Material
 from .units import number, to_core
 
 __all__ = ["BEARING_KEYS", "METHOD_NOTES", "PRESSFIT_KEYS", "ShaftLoads", "ShaftSeatResult",
-           "TORQUE_TYPES", "evaluate_seat", "json_fields", "mesh_forces", "seat_moment"]
+           "TORQUE_TYPES", "evaluate_seat", "headline_sentence", "is_shaft_check", "json_fields",
+           "mesh_forces", "seat_moment"]
 
 TORQUE_TYPES = ("static", "pulsating", "alternating")
 NAME_FATIGUE = "shaft fatigue at the hub edge"
@@ -372,6 +373,33 @@ def json_fields(res: ShaftSeatResult | None) -> dict:
                   "notch_factor_torsion": res.notch_factor_torsion, "shaft_seat": res.to_dict()})
 
 
+def is_shaft_check(check: Check) -> bool:
+    """True for the two checks this module adds ("shaft fatigue/yield at the hub edge")."""
+    return check.name in (NAME_FATIGUE, NAME_YIELD)
+
+
+def headline_sentence(check: Check) -> str:
+    """The verdict's sentence for a failing shaft check: what fails, by how much, and what helps
+    ("" for the yield check of a shaft DIN 743 does not cover: the fatigue check's sentence says it).
+
+    >>> c = Check(NAME_FATIGUE, 0.9, 1.2, ">=", "", REF_FATIGUE, "")
+    >>> headline_sentence(c)[:63]
+    'Shaft fatigue at the hub edge: safety 0.9 < 1.2 required (DIN 7'
+    """
+    if not math.isfinite(check.value):  # both checks refused: one sentence, on the fatigue check
+        return ("" if check.name == NAME_YIELD else
+                "The shaft at the hub edge is not checked for fatigue and yield (the shaft material is "
+                "outside DIN 743). Next: a steel shaft, or the shaft material's fatigue strengths "
+                "(sigma_bW, tau_tW, sigma_zdW) inline")
+    if check.name == NAME_FATIGUE:
+        return (f"Shaft fatigue at the hub edge: safety {check.value:.4g} < {check.limit:g} required "
+                "(DIN 743). Next: a larger shaft diameter, a stronger or surface-hardened shaft seat "
+                "(surface_hardening_factor), a smaller bending moment at the seat (supports closer to "
+                "the load) or a smaller load")
+    return (f"Shaft yield at the hub edge under the largest loads: safety {check.value:.4g} < "
+            f"{check.limit:g} required (DIN 743). Next: a larger or stronger shaft, or a smaller peak load")
+
+
 def _applies(m: Material) -> bool:
     return m.group == "steel" or not math.isnan(m.sigma_bW)
 
@@ -424,6 +452,11 @@ def evaluate_seat(*, d: float, di: float, material: Material, rz_um: float, load
                          "for the shaft check; the slip check uses axial_force as given")
     else:
         M, source = 0.0, "none given"
+        if module is not None and teeth is not None and torque > 0:
+            warns.append("gear hub (module and teeth) without bending_moment, bearing distances or overhang: "
+                         "the shaft check at the hub edge takes no bending moment, although the mesh forces "
+                         "of a loaded gear always bend its seat; give bearing_distance_a and "
+                         "bearing_distance_b (or overhang) to derive it, or bending_moment")
     F = KA * axial_force + fa
     tt = loads.torque_type
     t_mean = {"static": T, "pulsating": T / 2.0, "alternating": 0.0}[tt]

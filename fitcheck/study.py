@@ -765,7 +765,10 @@ def run_study(joint, settings: StudySettings | None = None, **overrides) -> Stud
                          if model.demand > 0 else "no contact pressure left (no load given)",
                          model, k_slip, n, st, rng)
     yld = _failure_mode("yield", "equivalent stress at hub bore or shaft above Rp0.2 (brittle part: "
-                        "largest principal stress above Rm)", model, k_yield, n, st, rng)
+                        "largest principal stress above Rm)" if a.get("design", "elastic") == "elastic" else
+                        "hub plastic through its whole wall (elastic-plastic design), or equivalent stress "
+                        "in the shaft above Rp0.2 (brittle shaft: largest principal stress above Rm)",
+                        model, k_yield, n, st, rng)
 
     targets = []
     checks: list[Check] = []

@@ -100,7 +100,7 @@ _EXAMPLES = {
     "temperature_difference": "'60 K' or '60 delta_degC'",
     "stiffness": "'250000 N/mm'",
     "compliance": "'4e-6 mm/N'",
-    "dimensionless": "a plain number",
+    "dimensionless": "'1.25'",
     "angle": "'30 deg'",
     "area": "'1800 mm**2' or '2.8 in**2'",
 }
@@ -225,7 +225,12 @@ def _remember(key: tuple[str, str], out: float) -> None:
 
 def _convert(value, kind: str, field: str) -> float:
     """``value`` read and converted to the core unit of ``kind`` (no range check)."""
-    q = _parse(_offset_as_delta(value) if kind in _DELTA_KINDS else value, field)
+    try:
+        q = _parse(_offset_as_delta(value) if kind in _DELTA_KINDS else value, field)
+    except InputError as e:  # unreadable text: say what this field takes, with its own example
+        if e.allowed.startswith("a number with a known unit"):
+            raise InputError(field, value, f"{_article(kind)}, e.g. {_EXAMPLES[kind]}", e.hint) from None
+        raise
     if isinstance(q, float):
         return q
     try:
@@ -242,6 +247,8 @@ def _article(kind: str) -> str:
     name = kind.replace("_", " ")
     if kind == "small_length":
         name = "length"
+    if kind == "dimensionless":
+        name = "number"
     return ("an " if name[0] in "aeiou" else "a ") + name
 
 
@@ -262,11 +269,14 @@ def _check_range(out, value, kind, field, lo, hi, lo_open, hi_open):
     bad_lo = lo is not None and (out <= lo if lo_open else out < lo)
     bad_hi = hi is not None and (out >= hi if hi_open else out > hi)
     if bad_lo or bad_hi:
+        # angles are kept in radians but written and read in degrees
+        show = (lambda x: f"{round(math.degrees(x), 6):g} deg") if kind == "angle" else \
+            (lambda x: f"{x:g} {unit}".rstrip())
         parts = []
         if lo is not None:
-            parts.append(f"{'>' if lo_open else '>='} {lo:g} {unit}".rstrip())
+            parts.append(f"{'>' if lo_open else '>='} {show(lo)}")
         if hi is not None:
-            parts.append(f"{'<' if hi_open else '<='} {hi:g} {unit}".rstrip())
+            parts.append(f"{'<' if hi_open else '<='} {show(hi)}")
         raise InputError(field, value, f"{_article(kind)} " + " and ".join(parts))
 
 
@@ -319,7 +329,7 @@ def number(value, field: str, *, lo: float | None = None, hi: float | None = Non
     >>> number(0.7, "mu", lo=0.0, hi=0.5)
     Traceback (most recent call last):
     ...
-    fitcheck.errors.InputError: mu: got 0.7; allowed: a dimensionless >= 0 and <= 0.5
+    fitcheck.errors.InputError: mu: got 0.7; allowed: a number >= 0 and <= 0.5
     """
     return to_core(value, "dimensionless", field, lo=lo, hi=hi, lo_open=lo_open, hi_open=hi_open)
 

@@ -230,3 +230,52 @@ def test_outer_diameter_growth_of_a_yielded_hub():
     assert r.hub_outer_growth_max == pytest.approx(30.0 * k * (r.plastic_zone_diameter / 30.0) ** 2 / 70000.0)
     sr, st = ep.hub_stresses(r.pressure_max, r.plastic_zone_diameter, 20.0, 30.0, 15.0, 260.0)
     assert r.hub_outer_growth_max == pytest.approx(30.0 * st / 70000.0, rel=1e-9)
+
+
+def test_passing_elastic_plastic_headline_states_the_plastic_zone_not_an_elastic_yield_safety():
+    # a partly yielding hub has an elastic "yield safety" below 1 by design: the verdict quotes the
+    # plastic zone's share of the wall against its permitted share instead
+    inp = PressFitInput.from_mapping({
+        "name": "ep", "diameter": "20 mm", "interference_min": "40 um", "interference_max": "75 um",
+        "length": "16 mm", "hub_outer_diameter": "30 mm", "shaft_material": "42CrMo4",
+        "hub_material": "C45E", "torque": "25 N*m", "design": "elastic-plastic"})
+    r = evaluate(inp)
+    zone = next(c for c in r.checks if c.name == "hub plastic zone at tightest fit")
+    assert r.ok and zone.value > 0 and r.hub_yield_safety < 1.0
+    assert f"hub plastic zone {zone.value:.0%} of the wall (permitted 30%)" in r.headline
+    assert "hub yield safety" not in r.headline
+
+
+def test_study_names_the_yield_limit_state_of_the_chosen_design():
+    from fitcheck.study import run_study
+
+    m = dict(ALU_GEAR, interference_min="70 um", interference_max="100 um", design="elastic-plastic")
+    with warnings.catch_warnings():
+        warnings.simplefilter("ignore")
+        pl = run_study(PressFitInput.from_mapping(m), samples=2000, seed=1, importance_samples=0)
+        el = run_study(PressFitInput.from_mapping(dict(m, design="elastic")), samples=2000, seed=1,
+                       importance_samples=0)
+    assert "hub plastic through its whole wall" in pl.yield_.definition
+    assert "hub bore" not in pl.yield_.definition
+    assert el.yield_.definition.startswith("equivalent stress at hub bore")
+
+
+def test_search_table_shows_the_plastic_zone_share_in_the_elastic_plastic_design(cli, tmp_path):
+    m = {k: v for k, v in ALU_GEAR.items() if not k.startswith("interference") and k != "diameter"}
+    m |= {"fit": "20 H7/x6", "design": "elastic-plastic"}
+    f = tmp_path / "alu.toml"
+    f.write_text("\n".join(["format_version = 1", "[[pressfit]]"] + [f'{k} = "{v}"' for k, v in m.items()])
+                 + "\n", encoding="utf-8")
+    code, out, err = cli("search", str(f), "--holes", "H7", "--shaft-grades", "6", "--top", "3")
+    assert "hub plastic zone (share of wall)" in out and "hub safety" not in out
+    from fitcheck.search import search_fits
+    with warnings.catch_warnings():
+        warnings.simplefilter("ignore")
+        best = search_fits(PressFitInput.from_mapping(m), holes=("H7",), shaft_grades=(6,)).passing[0]
+    share = next(c.value for c in best.checks if c.name == "hub plastic zone at tightest fit")
+    row = next(ln for ln in out.splitlines() if ln.startswith("1 "))
+    assert f" {share:.0%} " in row
+    f.write_text(f.read_text(encoding="utf-8").replace('"elastic-plastic"', '"elastic"')
+                 .replace('"15 N*m"', '"2 N*m"'), encoding="utf-8")
+    code, out, err = cli("search", str(f), "--holes", "H7", "--shaft-grades", "6", "--top", "3")
+    assert "hub safety" in out and "plastic zone" not in out

@@ -405,3 +405,51 @@ def test_charts_of_a_plastic_hub_and_an_opening_joint(demo_result):
         joint = chart.layout(charts.joint_diagram(sj, system))
         assert any(op[3].startswith("opening at FAab = ") for op in joint.ops if op[0] == "text")
         assert "<svg" in chart.to_svg(joint) and chart.to_drawing(walls, 300.0).width == 300.0
+
+
+def test_gear_seat_inputs_are_named_in_words_and_angles_in_degrees():
+    # the input table of an elastic-plastic gear seat with derived shaft loads: every key in words
+    # (no name cut at a parenthesis or a colon of its description), angles as a drawing gives them
+    text = """format_version = 1
+[[pressfit]]
+name = "g"
+diameter = "20 mm"
+interference_min = "40 um"
+interference_max = "75 um"
+length = "16 mm"
+module = "1.5 mm"
+teeth = 22
+helix_angle = "15 deg"
+bearing_distance_a = "15 mm"
+bearing_distance_b = "45 mm"
+shaft_material = "42CrMo4"
+hub_material = "C45E"
+torque = "25 N*m"
+design = "elastic-plastic"
+plastic_zone_limit = 0.25
+"""
+    rep = report.build(case_mod.evaluate(case_mod.loads(text)), plots=False)
+    rows = {r.name: r.value for s in rep.sections for r in s.inputs}
+    assert rows["normal module of the gear m"] == "1.5 mm"
+    assert rows["permitted plastic-zone share of the hub wall"] == "0.25"
+    assert rows["design of the press fit"] == "elastic-plastic"
+    assert rows["helix angle β of the gear"] == "15°"
+    assert "gear m" not in rows and "elastic-plastic design" not in rows
+    page = html.unescape(report.to_html(rep))
+    assert "at most permitted plastic-zone share of the hub wall" in page
+    assert "fretting fatigue of the shaft" not in page  # it is checked now (DIN 743)
+
+
+def test_inch_report_gives_the_shaft_loads_and_check_notes_in_inch_units(demo_result):
+    # the loads the shaft check used (M, T, F, mesh forces) read in the case's system, as the CLI's
+    # --units inch prints them; the demo gear: M = 1.497 N·m, T = 3.2 N·m, F = 60 N
+    # (1 lbf·in = 0.112984829 N·m, 1 lbf = 4.4482216 N: NIST SP 811)
+    rep = report.build(demo_result, plots=False, system="inch")
+    gear = rep.sections[0]
+    loads = next(n for n in gear.notes if n.startswith("shaft loads at the hub edge"))
+    assert "M = 13.25 lbf·in" in loads and "T = 28.32 lbf·in pulsating" in loads and "F = 13.49 lbf" in loads
+    assert "N·m" not in loads and " N," not in loads
+    fat = next(r for r in gear.checks if r.name == "shaft fatigue at the hub edge")
+    assert "ksi" in fat.note and "MPa" not in fat.note
+    si = report.build(demo_result, plots=False, system="SI").sections[0]
+    assert any("M = 1.497 N·m" in n for n in si.notes)

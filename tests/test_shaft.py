@@ -181,3 +181,110 @@ def test_materials_carry_din743_strengths():
     assert (m.sigma_zdW, m.sigma_bW, m.tau_tW, m.dB, m.din743_group) == (280.0, 350.0, 210.0, 16.0, "QT")
     mod = materials.from_mapping({"base": "C45E", "Rm": "800 MPa"})
     assert math.isnan(mod.sigma_bW)  # a changed Rm drops the tabulated fatigue strengths
+
+
+def test_failing_shaft_checks_get_their_own_verdict_sentence():
+    # the verdict of a failing shaft check names the check and the safeties and advises on the shaft,
+    # not on the press or the seat's axial location (which do not change the shaft's fatigue safety)
+    r = pressfit.evaluate(pressfit.PressFitInput.from_mapping({**GEAR, "bending_moment": "400 N*m"}))
+    fat = next(c for c in r.checks if c.name == "shaft fatigue at the hub edge")
+    assert not fat.passed
+    assert f"Shaft fatigue at the hub edge: safety {fat.value:.4g} < 1.2 required" in r.headline
+    assert "press" not in r.headline.split("Shaft fatigue")[1] and "exceeds" not in r.headline
+    b = bearings.evaluate(bearings.BearingSeatInput.from_mapping(
+        {"designation": "6204", "shaft": "k5", "housing": "H7", "bending_moment": "150 N*m"}))
+    bfat = next(c for c in b.checks if c.name == "shaft fatigue at the hub edge")
+    assert not bfat.passed and "Shaft fatigue at the hub edge: safety" in b.headline
+    assert "retaining ring" not in b.headline
+    y = bearings.evaluate(bearings.BearingSeatInput.from_mapping(
+        {"designation": "6204", "shaft": "k5", "housing": "H7", "bending_moment": "600 N*m",
+         "torque_type": "static"}))
+    assert any(c.name == "shaft yield at the hub edge" and not c.passed for c in y.checks)
+    assert "Shaft yield at the hub edge under the largest loads" in y.headline
+
+
+def test_non_steel_shaft_verdict_says_not_checked():
+    m = {**GEAR, "shaft_material": "EN AW-7075-T6", "bending_moment": "1 N*m"}
+    with warnings.catch_warnings():
+        warnings.simplefilter("ignore", MethodRangeWarning)
+        r = pressfit.evaluate(pressfit.PressFitInput.from_mapping(m))
+    assert r.headline.count("not checked") == 1 and "fatigue and yield" in r.headline and "sigma_bW" in r.headline
+
+
+_GEAR_TOML = """format_version = 1
+[[pressfit]]
+name = "g"
+fit = "25 H7/s6"
+length = "20 mm"
+module = "2 mm"
+teeth = 40
+shaft_material = "C45E"
+hub_material = "C45E"
+torque = "60 N*m"
+"""
+
+
+@pytest.mark.parametrize("line, field, shown, allowed", [
+    ('module = "-2 mm"', "pressfit[g].module", "'-2 mm'", "a length > 0 mm"),
+    ('helix_angle = "95 deg"', "pressfit[g].helix_angle", "'95 deg'", "an angle >= 0 deg and <= 45 deg"),
+    ('pressure_angle = "50 deg"', "pressfit[g].pressure_angle", "'50 deg'", "an angle >= 10 deg and <= 35 deg"),
+    ('design = "plastic"', "pressfit[g].design", "'plastic'", "'elastic' or 'elastic-plastic'"),
+    ('bending_moment = "abc"', "pressfit[g].bending_moment", "'abc'", "a torque, e.g. '30 N*m'"),
+    ('bending_moment = "5 m"', "pressfit[g].bending_moment", "'5 m'", "a torque, e.g. '30 N*m'"),
+    ('application_factor = "abc"', "pressfit[g].application_factor", "'abc'", "a number, e.g. '1.25'"),
+    ('torque_type = "pulsing"', "pressfit[g].torque_type", "'pulsing'", "'static', 'pulsating' or 'alternating'"),
+    ('mean_stress_case = 3', "pressfit[g].mean_stress_case", "3", "1 (constant mean stress) or 2"),
+    ('fatigue_safety = 0.5', "pressfit[g].fatigue_safety", "0.5", "a number >= 1 and <= 20"),
+])
+def test_bad_shaft_and_gear_keys_exit_2_naming_field_value_and_what_is_allowed(cli, tmp_path, line, field,
+                                                                                shown, allowed):
+    f = tmp_path / "bad.toml"
+    key = line.split(" = ")[0]
+    lines = [ln for ln in _GEAR_TOML.splitlines() if not ln.startswith(key + " = ")] + [line]
+    f.write_text("\n".join(lines) + "\n", encoding="utf-8")
+    for cmd in ("pressfit", "check"):
+        code, out, err = cli(cmd, str(f))
+        assert code == 2 and "Traceback" not in err
+        msg = next(ln for ln in err.splitlines() if field in ln)
+        assert f"{field}: got {shown}; allowed: {allowed}" in msg
+        assert sum(field + ":" in ln for ln in err.splitlines()) == 1  # each problem listed once
+
+
+def test_bad_shaft_loads_on_the_bearing_command_line(cli):
+    code, out, err = cli("bearing", "6204", "--bending-moment", "abc")
+    assert code == 2 and "bending_moment: got 'abc'; allowed: a torque" in err and "Traceback" not in err
+    code, out, err = cli("bearing", "6204", "--torque-type", "pulsing")
+    assert code == 2 and "torque_type" in err and "did you mean 'pulsating'" in err
+
+
+def test_verdict_sentence_never_rounds_a_failing_safety_up_to_its_limit():
+    c = shaft.Check(shaft.NAME_FATIGUE, 1.198, 1.2, ">=", "", shaft.REF_FATIGUE, "")
+    assert not c.passed and "safety 1.198 < 1.2 required" in shaft.headline_sentence(c)
+
+
+def test_bearing_command_line_sets_the_shaft_check_and_prints_its_loads(cli):
+    # K_A = 1.5 on M = 40 N·m: the shaft check uses 60 N·m; the required fatigue safety is the one given
+    code, out, err = cli("bearing", "6204", "--shaft", "k5", "--housing", "H7", "--bending-moment", "40 N*m",
+                         "--application-factor", "1.5", "--fatigue-safety", "2.5", "--json")
+    j = json.loads(out)
+    assert j["shaft_seat"]["bending_moment"] == pytest.approx(60_000.0)
+    fat = next(c for c in j["checks"] if c["name"] == "shaft fatigue at the hub edge")
+    assert fat["limit"] == 2.5 and fat["passed"] == (j["shaft_fatigue_safety"] >= 2.5)
+    code, out, err = cli("bearing", "6204", "--static-safety", "0.8")
+    assert code == 2 and "static_safety: got '0.8'; allowed: a number >= 1" in err
+
+
+def test_loaded_gear_seat_without_bending_data_is_warned_about():
+    # a meshing gear always bends its seat: a gear hub (module, teeth) with a torque but neither a
+    # bending moment nor the bearing distances gets M = 0 in the shaft check, and a warning says so
+    with warnings.catch_warnings(record=True) as caught:
+        warnings.simplefilter("always")
+        r = pressfit.evaluate(pressfit.PressFitInput.from_mapping(GEAR))
+    assert r.shaft.bending_moment == 0.0 and r.shaft.load_source == "none given"
+    msg = "without bending_moment, bearing distances or overhang"
+    assert any(msg in w for w in r.warnings) and any(msg in str(w.message) for w in caught)
+    with warnings.catch_warnings():
+        warnings.simplefilter("ignore")
+        for extra in ({"bending_moment": "5 N*m"}, {"bearing_distance_a": "20 mm", "bearing_distance_b": "30 mm"}):
+            r2 = pressfit.evaluate(pressfit.PressFitInput.from_mapping({**GEAR, **extra}))
+            assert not any(msg in w for w in r2.warnings)

@@ -344,6 +344,8 @@ def _seat_headline(checks, gov, group, smallest) -> str:
         elif c.name.startswith("rotating-load ring"):
             out.append(f"The ring under circumferential load may creep ({c.value:.1f} um of interference). "
                        "Next: a tighter class for that seat, finer roughness (fitcheck search)")
+        elif _shaft.is_shaft_check(c):
+            out += [x for x in (_shaft.headline_sentence(c),) if x]
         elif c.name.startswith("hoop stress"):
             out.append(f"{c.name[0].upper()}{c.name[1:]} {c.value:.0f} MPa exceeds {c.limit:.0f} MPa. "
                        "Next: a looser class")

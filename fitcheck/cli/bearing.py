@@ -34,7 +34,8 @@ JSON_KEYS = (
     "clearance_probability_below", "clearance_distribution", "clearance_worst_case_um",
     "smallest_group_worst_case", "clearance_states", "temperature_min_C", "temperature_max_C", "headline",
 )
-JSON_KEYS += ("shaft_fatigue_safety", "shaft_static_safety", "notch_factor_bending", "notch_factor_torsion")
+JSON_KEYS += ("shaft_fatigue_safety", "shaft_static_safety", "notch_factor_bending", "notch_factor_torsion",
+              "shaft_seat")  # DIN 743: the safeties, and the loads and factors behind them
 
 _OPTIONS = {  # option dest -> [[bearing]] key
     "shaft": "shaft", "housing": "housing", "tolerance_class": "tolerance_class",
@@ -47,7 +48,9 @@ _OPTIONS = {  # option dest -> [[bearing]] key
     "t_assembly": "temperature_assembly", "axial_force": "axial_force",
     "axial_location": "axial_location", "clearance_min": "clearance_min",
 }
-_OPTIONS.update(bending_moment="bending_moment", torque="torque", torque_type="torque_type")  # DIN 743 shaft
+_OPTIONS.update(bending_moment="bending_moment", torque="torque", torque_type="torque_type",  # DIN 743 shaft
+                application_factor="application_factor", fatigue_safety="fatigue_safety",
+                static_safety="static_safety")
 
 
 def add_arguments(p) -> None:
@@ -79,6 +82,12 @@ def add_arguments(p) -> None:
                    "the ring edge, e.g. '5 N*m' (DIN 743 shaft check)")
     p.add_argument("--torque", help="torque in the shaft at the seat, e.g. '10 N*m'")
     p.add_argument("--torque-type", dest="torque_type", help="static, pulsating or alternating (default)")
+    p.add_argument("--application-factor", dest="application_factor",
+                   help="application factor K_A on every shaft load (default 1.0)")
+    p.add_argument("--fatigue-safety", dest="fatigue_safety",
+                   help="required safety of the shaft against fatigue at the ring edge (default 1.2)")
+    p.add_argument("--static-safety", dest="static_safety",
+                   help="required safety of the shaft against yield at the ring edge (default 1.2)")
     p.add_argument("--json", action="store_true", help="print the results as JSON")
 
 

@@ -103,13 +103,17 @@ def print_search(r, k: int, current: str | None = None, out=None) -> None:
     if r.passing:
         out.write("Ranked fits (largest minimum slip safety first; * preferred)\n")
         rows = []
+        # elastic-plastic design: the hub is judged by its plastic zone, not by an elastic yield safety
+        plastic = r.passing[0].plastic_zone_share is not None
         for c in r.passing[:k]:
+            hub = f"{c.plastic_zone_share:.0%}" if plastic else f"{c.hub_yield_safety:.3g}"
             rows.append([c.rank, _name(c) + ("*" if c.preferred else ""), c.basis,
                          f"{c.interference_min_um:+g} … {c.interference_max_um:+g}",
-                         f"{c.slip_safety_min:.3g}", f"{c.hub_yield_safety:.3g}",
+                         f"{c.slip_safety_min:.3g}", hub,
                          f"{c.shaft_yield_safety:.3g}", f"{c.press_force_max / 1000:.3g}",
                          f"{c.pressure_min:.3g} … {c.pressure_max:.3g}"])
-        print_table(["rank", "fit", "basis", "interference [um]", "slip safety", "hub safety",
+        print_table(["rank", "fit", "basis", "interference [um]", "slip safety",
+                     "hub plastic zone (share of wall)" if plastic else "hub safety",
                      "shaft safety", "press force [kN]", "pressure [MPa]"], rows, out)
     if r.rejected:
         out.write("\nNearest rejected fits (failing checks and their margins)\n")

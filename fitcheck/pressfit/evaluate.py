@@ -362,8 +362,11 @@ def _headline(checks, r, state_lo, state_tight, state_shaft, state_loose, why_ze
     """One sentence a reviewer reads first: the verdict, its real cause, and the next step."""
     if all(c.passed for c in checks):
         slip = checks[0]
+        zone = next((c for c in checks if c.name == "hub plastic zone at tightest fit"), None)
+        hub = (f"hub yield safety {r['hub_yield_safety']:.3g}" if zone is None else
+               f"hub plastic zone {zone.value:.0%} of the wall (permitted {zone.limit:.0%})")
         return (f"Holds in every operating state: slip safety {slip.value:.3g} (governing: {state_lo}), "
-                f"hub yield safety {r['hub_yield_safety']:.3g} (governing: {state_tight}).")
+                f"{hub} (governing: {state_tight}).")
     out = []
     by = {c.name: c for c in checks}
     c = by["slip at loosest fit"]
@@ -392,7 +395,9 @@ def _headline(checks, r, state_lo, state_tight, state_shaft, state_loose, why_ze
         out.append(f"Loosens at {c.value:.0f} rpm, below the operating {c.limit:.0f} rpm ({state_loose}). "
                    "Next: a tighter fit or a thicker hub")
     for c in checks[4:]:
-        if not c.passed:
+        if not c.passed and _shaft.is_shaft_check(c):
+            out += [x for x in (_shaft.headline_sentence(c),) if x]
+        elif not c.passed:
             out.append(f"{c.name[0].upper()}{c.name[1:]} {c.value:.4g} {c.unit} exceeds {c.limit:.4g} "
                        f"{c.unit}. Next: {'cool the shaft or a looser fit' if 'heating' in c.name else 'a stronger press or a looser fit'}")
     return "Does not hold. " + " ".join(x.rstrip(".") + "." for x in out)

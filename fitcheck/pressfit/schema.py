@@ -97,10 +97,11 @@ METHOD_NOTES: list[tuple[str, str]] = [
     ("Elastic-plastic design (design = 'elastic-plastic'): ideally elastic-plastic hub on an elastic "
      "shaft, yield σt − σr = (2/√3)·Rp0.2; p = Rp0.2/√3·[1 − (D_pl/D_o)² + 2·ln(D_pl/d)], "
      "δ/d = (2/√3)·Rp0.2/E_h·(D_pl/d)² + p·(K_shaft − (1 − ν_h)/E_h); states of smaller interference "
-     "unload elastically; plastic zone within plastic_zone_limit of the hub wall",
+     "unload elastically; the plastic zone's share (D_pl − d)/(D_o − d) at most plastic_zone_limit",
      "DIN 7190-1:2017 (elastic-plastic range) — from memory; derived in fitcheck.core.elastoplastic"),
-    ("Not implemented: end effects at the hub faces, "
-     "fretting fatigue of the shaft", "DIN 7190-1:2017 (elastic-plastic range)"),
+    ("Not implemented: the stress peaks of the end effects at the hub faces in the press-fit stresses "
+     "(the shaft's notch at the hub edge is checked with DIN 743's press-fit notch factors, below)",
+     "DIN 7190-1:2017 (elastic-plastic range)"),
 ]
 METHOD_NOTES.extend(_shaft.METHOD_NOTES)
 

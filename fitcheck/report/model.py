@@ -21,7 +21,7 @@ from dataclasses import dataclass, field
 
 from .. import CAUTION, __version__
 from ..checks import Check
-from ..display import margin_text, show_in
+from ..display import margin_text, show_in, text_in_system
 from ..errors import InputError
 from . import figures as _figures
 from .drawing import DrawingItem, decisions
@@ -187,7 +187,8 @@ def check_row(joint: str, c: Check, system: str, names: Mapping[str, str]) -> Ch
                     value=quantity_text(c.value, c.unit, system),
                     limit=f"{sense} {quantity_text(c.limit, c.unit, system)}",
                     margin=check_margin(c), passed=bool(c.passed),
-                    reference=prose(c.reference, names), note="; ".join(notes))
+                    reference=prose(c.reference, names),
+                    note="; ".join(text_in_system(n, system) for n in notes))
 
 
 def _inputs(jr, case, keys, system: str, names) -> list[InputRow]:
@@ -327,7 +328,7 @@ def build(result, *, plots: bool = True, system: str | None = None) -> Report:
         keys = getattr(mod, "KEYS", {})
         figs, errs = _plots(jr, eng, system) if plots else ([], [])
         rows = [check_row(jr.name, c, system, names) for c in jr.checks]
-        notes = [prose(w, names) for w in jr.notes] + _sources(jr.result, names)
+        notes = [text_in_system(prose(w, names), system) for w in jr.notes] + _sources(jr.result, names)
         sec = Section(number=n, kind=eng.label, name=jr.name,
                       inputs=_inputs(jr, case, keys, system, names),
                       method=[(prose(s, names), prose(r, names))

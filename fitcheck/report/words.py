@@ -46,6 +46,11 @@ NAMES: dict[str, str] = {
     "temperature_assembly": "temperature at assembly",
     "speed": "operating speed",
     "unit_system": "unit system of the case",
+    "module": "normal module of the gear",
+    "design": "design of the press fit",
+    "plastic_zone_limit": "permitted plastic-zone share of the hub wall",
+    "overhang": "overhang of the gear from the hub edge",
+    "bending_moment": "rotating bending moment in the shaft at the hub edge",
 }
 
 #: Symbols printed beside the names (the trade's symbols: DIN 7190, VDI 2230, ISO 286).
@@ -67,6 +72,9 @@ SYMBOLS: dict[str, str] = {
     "utilisation": "ν", "load_introduction": "n",
     "clamp_outer_diameter": "D_A", "smoothing_factor": "k_smooth",
     "joining_clearance": "Δd_join", "temperature_shaft_cooled": "ϑ_shaft,cooled",
+    "bending_moment": "M_b", "helix_angle": "β", "pressure_angle": "α_n", "application_factor": "K_A",
+    "surface_hardening_factor": "K_V", "bearing_distance_a": "a", "bearing_distance_b": "b",
+    "overhang": "e",
 }
 
 #: Printed spellings of units (the parser's spelling → the trade's).
@@ -190,6 +198,9 @@ def _number(x: float) -> str:
     return num(x, 6)
 
 
+_RADIANS = re.compile(r"([-+]?(?:\d+\.?\d*|\.\d+)(?:[eE][-+]?\d+)?)\s*rad")
+
+
 def value_text(v, system: str = "SI", names: Mapping[str, str] | None = None) -> str:
     """An input value as a report prints it, in the case's unit system.
 
@@ -202,6 +213,8 @@ def value_text(v, system: str = "SI", names: Mapping[str, str] | None = None) ->
     ('2.5 µm', 'rotating inner', 'yes')
     >>> value_text([0.08, 0.12])
     '0.08 … 0.12'
+    >>> value_text("0.2617993877991494 rad")
+    '15°'
     """
     if isinstance(v, Mapping):
         return ", ".join(f"{(names or {}).get(k, str(k).replace('_', ' '))} = "
@@ -216,6 +229,9 @@ def value_text(v, system: str = "SI", names: Mapping[str, str] | None = None) ->
     if isinstance(v, bool | int | float):
         return _number(v)
     text = str(v)
+    rad = _RADIANS.fullmatch(text.strip())
+    if rad:  # angles are stored in radians (lossless); a drawing gives them in degrees
+        return f"{num(math.degrees(float(rad.group(1))), 6)}°"
     if system == "inch":
         conv = convert_text(text, "inch")
         if conv != text:

@@ -695,7 +695,9 @@ def _fit_search_section(name: str, text: str) -> None:
                    "interference": _range(c.interference_min_um, c.interference_max_um, "um",
                                           system),
                    "slip safety, loosest": unitsys.num(c.slip_safety_min, 3),
-                   "hub yield safety": unitsys.num(c.hub_yield_safety, 3),
+                   **({"hub plastic zone (share of wall)": f"{c.plastic_zone_share:.0%}"}
+                      if c.plastic_zone_share is not None else  # elastic-plastic design
+                      {"hub yield safety": unitsys.num(c.hub_yield_safety, 3)}),
                    "shaft yield safety": unitsys.num(c.shaft_yield_safety, 3)}
             if shrink:
                 row["hub heating to"] = unitsys.show_in(c.shrink_temperature, "degC", system)

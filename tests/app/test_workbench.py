@@ -352,3 +352,16 @@ def test_reference_lines_are_named_in_the_legend_not_over_each_other(app_test, p
             assert len({json.dumps(p) for p in pats}) == len(pats)
             named += len(names)
     assert named  # every one of these pages draws at least one reference line
+
+
+def test_the_fit_ranking_shows_the_plastic_zone_share_in_the_elastic_plastic_design(app_test):
+    doc = demo_doc()
+    doc["pressfit"][0]["design"] = "elastic-plastic"
+    at = app_test("lot_study", query={**addr(doc), "search": f"pressfit:{PF}"})
+    at.button(key="ls.run_search").click().run()
+    assert not at.exception
+    inp = casefile.loads(tomlwrite.dumps(doc)).pressfits[0]
+    r = search_fits(inp)
+    first = next(t.value for t in at.table if "rank" in t.value.columns).iloc[0]
+    assert "hub yield safety" not in first.index
+    assert first["hub plastic zone (share of wall)"] == f"{r.best.plastic_zone_share:.0%}"
