@@ -28,9 +28,11 @@ ALIGN = 2 << 20
 def empty_aligned(n: int, dtype=np.float64) -> np.ndarray:
     """An uninitialised 1-D array of ``n`` elements starting at a multiple of :data:`ALIGN` bytes.
 
-    Arrays below ``ALIGN`` bytes are a plain :func:`numpy.empty`. The result is a view into a
-    buffer that reaches from below its start to the end of its last ``ALIGN`` block; the
-    untouched head costs address space, not memory.
+    Arrays below ``2·ALIGN`` bytes (numpy's own threshold for asking for huge pages is 4 MiB) are
+    a plain :func:`numpy.empty`. The result is a view into a buffer that reaches from below its
+    start to the end of its last ``ALIGN`` block; the untouched head costs address space, not
+    memory, but the last huge page is whole: up to ``ALIGN`` bytes more memory per array (5 % at
+    10⁶ float64 values) for far fewer page faults.
 
     >>> a = empty_aligned(1_000_000)
     >>> a.shape, a.dtype, a.ctypes.data % ALIGN
@@ -38,7 +40,7 @@ def empty_aligned(n: int, dtype=np.float64) -> np.ndarray:
     """
     dtype = np.dtype(dtype)
     size = n * dtype.itemsize
-    if size < ALIGN:
+    if size < 2 * ALIGN:
         return np.empty(n, dtype=dtype)
     buf = np.empty(-(-size // ALIGN) * ALIGN + ALIGN, dtype=np.uint8)
     start = -buf.ctypes.data % ALIGN
