@@ -561,7 +561,7 @@ def _seat(*, d, di, sigma_B_dB, sigma_S_dB, sigma_zdW_dB, sigma_bW_dB, tau_tW_dB
     lg0, lg1 = math.log10(d0), math.log10(d1)
     x1 = np.clip(lg_d if d_eff is None else np.log10(np.asarray(d_eff, dtype=float)), lg0, lg1)
     x1 -= lg0                                                             # lg(d_eff/d0), clipped
-    xB = min(max(math.log10(float(d_B)), lg0), lg1) - lg0
+    xB = float(np.clip(np.log10(d_B), lg0, lg1) - lg0)
     if xB == 0.0:  # d_B at or below the start of the slope (the usual 16 mm): K1(d_B) = 1
         K1 = np.subtract(1.0, a_t * x1, out=o("K1"))
         K1y = np.subtract(1.0, a_y * x1, out=o("K1_yield"))
