@@ -114,3 +114,102 @@ def test_whole_chain_equals_the_step_functions(d, de, sB, rz, group, dB):
     assert float(r["K_sigma_b"]) == pytest.approx(float(Ks), rel=1e-12)
     assert float(r["K_tau"]) == pytest.approx(float(Kt), rel=1e-12)
     assert float(r["psi_b"]) == pytest.approx(float(din743.psi(r["sigma_bWK"], K1, sB)), rel=1e-12)
+
+
+def _step_by_step(d, di, sB, sS, s_zdW, s_bW, t_tW, group, d_B, d_eff, rz, k_v, Ma, Tm, Ta, Fm, Mmax, Tmax, Fmax,
+                  case):
+    """Every output of press_fit_seat, one documented step function after the other (no shared terms)."""
+    K1 = din743.k1(d_eff, group) / din743.k1(d_B, group)
+    K1y = din743.k1(d_eff, group, "yield") / din743.k1(d_B, group, "yield")
+    sB_d = K1 * sB
+    bs, bt = din743.press_fit_notch_factors(d, sB_d)
+    K2 = din743.k2(d)
+    kfs, kft = din743.roughness_factors(rz, sB_d)
+    Ksb = din743.total_factor(bs, K2, kfs, k_v)
+    Kszd = din743.total_factor(bs, din743.k2(d, tension=True), kfs, k_v)
+    Kt = din743.total_factor(bt, K2, kft, k_v)
+    s_bWK, s_zdWK, t_tWK = s_bW * K1 / Ksb, s_zdW * K1 / Kszd, t_tW * K1 / Kt
+    sba, tta, szm = din743.nominal_stresses(d, di, Ma, Ta, Fm)
+    ttm = din743.nominal_stresses(d, di, 0.0, Tm, 0.0)[1]
+    smv, tmv = din743.equivalent_mean_stress(szm, 0.0, ttm)
+    s_zdFK = K1y * sS
+    s_bFK = np.where(di > 0, 1.0, 1.2) * s_zdFK
+    t_tFK = s_bFK / np.sqrt(3.0)
+    psi_b, psi_zd, psi_t = (din743.psi(w, K1, sB) for w in (s_bWK, s_zdWK, t_tWK))
+    term_b = din743.stress_ratio_term(sba, smv, s_bWK, s_bFK, psi_b, case)
+    term_t = din743.stress_ratio_term(tta, tmv, t_tWK, t_tFK, psi_t, case)
+    sb_max, tt_max, sz_max = din743.nominal_stresses(d, di, np.abs(Mmax), np.abs(Tmax), np.abs(Fmax))
+    return {
+        "K1": K1, "K1_yield": K1y, "sigma_B_d": sB_d, "beta_sigma": bs, "beta_tau": bt, "K2": K2,
+        "KF_sigma": kfs, "KF_tau": kft, "K_sigma_b": Ksb, "K_sigma_zd": Kszd, "K_tau": Kt,
+        "sigma_bWK": s_bWK, "sigma_zdWK": s_zdWK, "tau_tWK": t_tWK, "psi_b": psi_b, "psi_zd": psi_zd, "psi_t": psi_t,
+        "sigma_ba": sba, "tau_ta": tta, "tau_tm": ttm, "sigma_zdm": szm, "sigma_mv": smv, "tau_mv": tmv,
+        "sigma_bFK": s_bFK, "sigma_zdFK": s_zdFK, "tau_tFK": t_tFK,
+        "fatigue_safety": din743.fatigue_safety(0.0, term_b, term_t),
+        "static_safety": din743.static_safety(sz_max, sb_max, tt_max, s_zdFK, s_bFK, t_tFK),
+    }
+
+
+@pytest.mark.parametrize("case", [1, 2])
+@pytest.mark.parametrize("group, d_B, k_v", [("QT", 16.0, 1.0), ("case", 30.0, "array"), ("structural", 16.0, 1.3)])
+@pytest.mark.parametrize("chunk", [997, 10**6])
+def test_every_output_equals_the_step_functions(monkeypatch, case, group, d_B, k_v, chunk):
+    # the chain shares logarithms and reciprocals and writes block by block into its outputs; every
+    # output must still be the composition of the documented steps (rounding only), whole-array or blocked
+    monkeypatch.setattr(din743, "CHUNK", chunk)
+    n = 3 * 997 + 1
+    rng = np.random.default_rng(7 + case)
+    d = rng.uniform(3.0, 400.0, n)
+    d_eff = np.where(rng.uniform(size=n) < 0.5, d, rng.uniform(3.0, 400.0, n))
+    di = np.where(rng.uniform(size=n) < 0.5, 0.0, d * rng.uniform(0.0, 0.8, n))
+    sB = rng.uniform(300.0, 1400.0, n)
+    sS = 0.75 * sB
+    s_zdW, s_bW, t_tW = 0.4 * sB, rng.uniform(0.45, 0.55, n) * sB, 0.3 * sB
+    rz = rng.uniform(0.2, 40.0, n)
+    kv = rng.uniform(1.0, 2.0, n) if k_v == "array" else k_v
+    # amplitudes: some zero, some negative (they add nothing to the fatigue term)
+    Ma = rng.choice([0.0, -1.0, 1.0, 1.0, 1.0], n) * rng.uniform(1e3, 1e6, n)
+    Ta = rng.choice([0.0, 1.0, 1.0], n) * rng.uniform(1e3, 5e5, n)
+    Tm = rng.uniform(-5e5, 5e5, n)
+    Fm = rng.uniform(-2e4, 2e4, n)
+    Mmax = np.abs(Ma) * rng.uniform(1.0, 2.0, n)
+    r = din743.press_fit_seat(d=d, di=di, sigma_B_dB=sB, sigma_S_dB=sS, sigma_zdW_dB=s_zdW, sigma_bW_dB=s_bW,
+                              tau_tW_dB=t_tW, group=group, d_B=d_B, d_eff=d_eff, rz_um=rz, k_v=kv,
+                              moment_amplitude=Ma, torque_mean=Tm, torque_amplitude=Ta, axial_mean=Fm,
+                              moment_max=Mmax, mean_stress_case=case)
+    ref = _step_by_step(d, di, sB, sS, s_zdW, s_bW, t_tW, group, d_B, d_eff, rz, kv, Ma, Tm, Ta, Fm, Mmax,
+                        np.abs(Tm) + Ta, Fm, case)
+    assert r.keys() == ref.keys()
+    for k, v in ref.items():
+        assert np.shape(r[k]) == (n,), k
+        np.testing.assert_allclose(r[k], v, rtol=1e-12, atol=0.0, err_msg=k)
+    assert np.all(np.isinf(r["fatigue_safety"][(Ma <= 0) & (Ta == 0)]))
+
+
+@pytest.mark.parametrize("chunk", [997, 10**6])
+def test_scalar_inputs_with_the_defaults_equal_the_step_functions(monkeypatch, chunk):
+    # the bench's tolerance-study form: one seat, default fatigue strengths (DIN 743-3 ratios), moment sampled
+    monkeypatch.setattr(din743, "CHUNK", chunk)
+    M = np.random.default_rng(3).uniform(5e3, 3e4, 3 * 997 + 1)
+    r = din743.press_fit_seat(d=20.0, sigma_B_dB=700.0, sigma_S_dB=490.0, rz_um=4.0, moment_amplitude=M,
+                              torque_mean=6000.0, torque_amplitude=6000.0, axial_mean=300.0)
+    ref = _step_by_step(20.0, 0.0, 700.0, 490.0, 280.0, 350.0, 210.0, "QT", 16.0, 20.0, 4.0, 1.0, M, 6000.0,
+                        6000.0, 300.0, M, 12000.0, 300.0, 2)
+    for k, v in ref.items():
+        assert np.shape(r[k]) == np.shape(v), k
+        np.testing.assert_allclose(r[k], v, rtol=1e-12, atol=0.0, err_msg=k)
+
+
+def test_inputs_of_different_shapes_broadcast():
+    # a column of diameters against rows of roughness, heat-treatment diameter, axial force and K_V
+    d = np.array([[12.0], [25.0], [60.0]])
+    rows = dict(rz_um=np.array([0.5, 4.0, 16.0, 40.0]), d_eff=np.array([10.0, 40.0, 80.0, 200.0]),
+                axial_mean=np.array([0.0, 300.0, -900.0, 5e3]), k_v=np.array([1.0, 1.2, 1.5, 1.0]))
+    common = dict(sigma_B_dB=700.0, sigma_S_dB=490.0, moment_amplitude=1e4, torque_mean=2e4, torque_amplitude=5e3)
+    r = din743.press_fit_seat(d=d, **rows, **common)
+    for i in range(3):
+        for j in range(4):
+            rij = din743.press_fit_seat(d=float(d[i, 0]), **{k: float(v[j]) for k, v in rows.items()}, **common)
+            for k, v in rij.items():
+                assert np.shape(r[k]) == (3, 4), k
+                assert r[k][i, j] == pytest.approx(float(v), rel=1e-13), k

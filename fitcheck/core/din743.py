@@ -33,6 +33,7 @@ DIN 743-3:2012-12, Teil 3: Werkstoff-Festigkeitswerte (σ_B, σ_S, σ_zdW, σ_bW
 from __future__ import annotations
 
 import functools
+import math
 
 import numpy as np
 
@@ -488,7 +489,9 @@ def press_fit_seat(*, d, di=0.0, sigma_B_dB, sigma_S_dB, sigma_zdW_dB=None, sigm
         ``KF_tau``, ``K_sigma_b``, ``K_sigma_zd``, ``K_tau``, ``sigma_bWK``, ``sigma_zdWK``,
         ``tau_tWK``, ``psi_b``, ``psi_zd``, ``psi_t``, ``sigma_ba``, ``tau_ta``, ``tau_tm``,
         ``sigma_zdm``, ``sigma_mv``, ``tau_mv``, ``sigma_bFK``, ``sigma_zdFK``, ``tau_tFK``,
-        ``fatigue_safety``, ``static_safety`` (stresses [MPa], factors [-]).
+        ``fatigue_safety``, ``static_safety`` (stresses [MPa], factors [-]). A result that depends
+        on an array input has the broadcast shape of all array inputs; one that depends on
+        scalars only is a scalar.
 
     Notes
     -----
@@ -512,17 +515,40 @@ def press_fit_seat(*, d, di=0.0, sigma_B_dB, sigma_S_dB, sigma_zdW_dB=None, sigm
               moment_amplitude=moment_amplitude, torque_mean=torque_mean,
               torque_amplitude=torque_amplitude, axial_mean=axial_mean, moment_max=moment_max,
               torque_max=torque_max, axial_max=axial_max)
+    arrays = {k: v for k, v in kw.items() if v is not None and np.ndim(v) > 0}
+    if len({np.shape(v) for v in arrays.values()}) > 1:
+        # array inputs of different shapes: one broadcast shape for all (views), as the blocks have;
+        # the chain works in place on its intermediate arrays
+        kw.update(zip(arrays, np.broadcast_arrays(*arrays.values()), strict=True))
     # long arrays in cache-sized blocks (fitcheck.core.blocks): the same numbers, less memory traffic
     return in_blocks(functools.partial(_seat, group=group, mean_stress_case=mean_stress_case), kw,
-                     CHUNK, full_outputs=False)
+                     CHUNK, full_outputs=False, direct=True)
+
+
+_LG7_5, _LG150, _LG20 = math.log10(7.5), math.log10(150.0), math.log10(20.0)
+_XBK = (math.log10(D_BK) - _LG7_5) / _LG20          # lg(d_BK/7.5)/lg 20
+_U0 = 0.2 * (math.log10(2.7) - 0.43 * 3.0)          # 0.2·(lg 2.7 − 0.43·lg 1000)
 
 
 def _seat(*, d, di, sigma_B_dB, sigma_S_dB, sigma_zdW_dB, sigma_bW_dB, tau_tW_dB, group, d_B, d_eff,
           rz_um, k_v, moment_amplitude, torque_mean, torque_amplitude, axial_mean, moment_max,
-          torque_max, axial_max, mean_stress_case):
-    """The chain of :func:`press_fit_seat` on one block of joints (every argument given)."""
-    # The same equations as the step functions above, with every logarithm taken once
-    # (lg d, lg σ_B(d), lg Rz): the chain runs on 10⁶-long arrays in a tolerance study.
+          torque_max, axial_max, mean_stress_case, out=None):
+    """The chain of :func:`press_fit_seat` on one block of joints (every argument given).
+
+    ``out``: optional dict of arrays the named results are written into (see
+    :func:`fitcheck.core.blocks.in_blocks`, ``direct``).
+    """
+    # The same equations as the step functions above, arranged for 10⁶-long arrays in a tolerance
+    # study: every logarithm taken once (lg d, lg σ_B(d), lg Rz), constants folded, a reciprocal
+    # of W_b instead of five divisions by it, each result written once into its output array.
+    # tests/test_din743.py checks the chain against the step functions.
+    o = {}.get if out is None else out.get
+    if mean_stress_case not in (1, 2):
+        raise ValueError(f"mean-stress case {mean_stress_case!r}; allowed: 1 or 2")
+    try:
+        _, a_t, a_y, d1, d0 = K1_GROUPS[group]
+    except KeyError:
+        raise ValueError(f"K1 group {group!r}; allowed: {', '.join(K1_GROUPS)}") from None
     d = np.asarray(d, dtype=float)
     di = np.asarray(di, dtype=float)
     sB = np.asarray(sigma_B_dB, dtype=float)
@@ -530,62 +556,124 @@ def _seat(*, d, di, sigma_B_dB, sigma_S_dB, sigma_zdW_dB, sigma_bW_dB, tau_tW_dB
     s_zdW = RATIO_SIGMA_ZDW * sB if sigma_zdW_dB is None else np.asarray(sigma_zdW_dB, dtype=float)
     s_bW = RATIO_SIGMA_BW * sB if sigma_bW_dB is None else np.asarray(sigma_bW_dB, dtype=float)
     t_tW = RATIO_TAU_TW * sB if tau_tW_dB is None else np.asarray(tau_tW_dB, dtype=float)
-    lg_d = _lg(d)
-    try:
-        _, a_t, a_y, d1, d0 = K1_GROUPS[group]
-    except KeyError:
-        raise ValueError(f"K1 group {group!r}; allowed: {', '.join(K1_GROUPS)}") from None
-    lg_de = lg_d if d_eff is None else _lg(np.asarray(d_eff, dtype=float))
-    x1 = np.clip(lg_de, np.log10(d0), np.log10(d1)) - np.log10(d0)      # lg(d_eff/d0), clipped
-    xB = float(np.clip(np.log10(d_B), np.log10(d0), np.log10(d1)) - np.log10(d0))
-    K1 = (1.0 - a_t * x1) / (1.0 - a_t * xB)
-    K1y = (1.0 - a_y * x1) / (1.0 - a_y * xB)
-    sB_d = K1 * sB
-    lg_sBd = _lg(sB_d)
-    # notch factors at d_BK and at d (K3 with β(d_BK) for α)
-    lg_bs = np.log10(2.7) + 0.43 * (lg_sBd - 3.0)
-    lg_bt = np.log10(0.65) + lg_bs
-    bs_bk = np.exp(lg_bs * np.log(10.0))  # 10**lg_bs; exp is several times faster than power
-    xd = (np.clip(lg_d, np.log10(7.5), np.log10(150.0)) - np.log10(7.5)) / np.log10(20.0)
-    xbk = (np.log10(D_BK) - np.log10(7.5)) / np.log10(20.0)
-    bs = bs_bk * (1.0 - 0.2 * lg_bs * xbk) / (1.0 - 0.2 * lg_bs * xd)
-    bt = 0.65 * bs_bk * (1.0 - 0.2 * lg_bt * xbk) / (1.0 - 0.2 * lg_bt * xd)
-    K2 = 1.0 - 0.2 * xd
-    kfs = 1.0 - 0.22 * _lg(np.maximum(np.asarray(rz_um, dtype=float), 1.0)) * (lg_sBd - np.log10(20.0) - 1.0)
-    kft = 0.575 * kfs + 0.425
-    Ksb = (bs / K2 + 1.0 / kfs - 1.0) / k_v
-    Kszd = (bs + 1.0 / kfs - 1.0) / k_v
-    Kt = (bt / K2 + 1.0 / kft - 1.0) / k_v
-    s_bWK = s_bW * K1 / Ksb
-    s_zdWK = s_zdW * K1 / Kszd
-    t_tWK = t_tW * K1 / Kt
+    # K1(d_eff)/K1(d_B) for σ_B and σ_S (k1)
+    lg_d = np.log10(d)
+    lg0, lg1 = math.log10(d0), math.log10(d1)
+    x1 = np.clip(lg_d if d_eff is None else np.log10(np.asarray(d_eff, dtype=float)), lg0, lg1)
+    x1 -= lg0                                                             # lg(d_eff/d0), clipped
+    xB = float(np.clip(np.log10(d_B), lg0, lg1) - lg0)
+    if xB == 0.0:  # d_B at or below the start of the slope (the usual 16 mm): K1(d_B) = 1
+        K1 = np.subtract(1.0, a_t * x1, out=o("K1"))
+        K1y = np.subtract(1.0, a_y * x1, out=o("K1_yield"))
+    else:
+        K1 = np.divide(1.0 - a_t * x1, 1.0 - a_t * xB, out=o("K1"))
+        K1y = np.divide(1.0 - a_y * x1, 1.0 - a_y * xB, out=o("K1_yield"))
+    sB_d = np.multiply(K1, sB, out=o("sigma_B_d"))
+    lg_sBd = np.log10(sB_d)
+    # notch factors at d_BK, lg β(d_BK) = lg 2.7 + 0.43·lg(σ_B(d)/1000), and at d (K3 with β(d_BK)
+    # for α) (press_fit_notch_factors, k3); u = 0.2·lg βσ(d_BK)
+    u = 0.2 * 0.43 * lg_sBd
+    u += _U0
+    bs_bk = np.exp(u * (math.log(10.0) / 0.2))  # 10**lg βσ; exp is several times faster than power
+    xd = np.clip(lg_d, _LG7_5, _LG150, out=_own(lg_d))
+    xd -= _LG7_5
+    xd /= _LG20                                                           # lg(d/7.5)/lg 20, clipped
+    num = 1.0 - _XBK * u
+    den = u * xd
+    den = np.subtract(1.0, den, out=_own(den))
+    num /= den
+    bs = np.multiply(bs_bk, num, out=o("beta_sigma"))
+    u += 0.2 * math.log10(0.65)                                           # 0.2·lg βτ(d_BK)
+    num = (0.65 * _XBK) * u
+    num = np.subtract(0.65, num, out=_own(num))                           # 0.65·(1 − 0.2·lg βτ·x_BK)
+    den = u * xd
+    den = np.subtract(1.0, den, out=_own(den))
+    num /= den
+    bt = np.multiply(bs_bk, num, out=o("beta_tau"))
+    K2 = np.subtract(1.0, 0.2 * xd, out=o("K2"))                         # k2
+    # roughness (roughness_factors)
+    ln_rz = np.clip(np.asarray(rz_um, dtype=float), 1.0, np.inf)
+    ln_rz = np.log(ln_rz, out=_own(ln_rz))
+    kfs = lg_sBd - (_LG20 + 1.0)
+    kfs *= (-0.22 / math.log(10.0)) * ln_rz
+    kfs = np.add(1.0, kfs, out=o("KF_sigma"))
+    kft = 0.575 * kfs
+    kft = np.add(kft, 0.425, out=o("KF_tau"))
+    # total factors (total_factor); K_V = 1 divides by nothing
+    kv = None if np.ndim(k_v) == 0 and float(k_v) == 1.0 else np.asarray(k_v, dtype=float)
+    r_s = 1.0 / kfs
+    r_s -= 1.0                                                            # 1/K_Fσ − 1
+    r_t = 1.0 / kft
+    r_t -= 1.0
+    if kv is None:
+        Kszd = np.add(bs, r_s, out=o("K_sigma_zd"))
+        Ksb = bs / K2
+        Ksb = np.add(Ksb, r_s, out=o("K_sigma_b"))
+        Kt = bt / K2
+        Kt = np.add(Kt, r_t, out=o("K_tau"))
+    else:
+        Kszd = np.divide(bs + r_s, kv, out=o("K_sigma_zd"))
+        Ksb = bs / K2
+        Ksb += r_s
+        Ksb = np.divide(Ksb, kv, out=o("K_sigma_b"))
+        Kt = bt / K2
+        Kt += r_t
+        Kt = np.divide(Kt, kv, out=o("K_tau"))
+    # component fatigue limits and ψ (psi)
+    s_bWK = np.divide(s_bW * K1, Ksb, out=o("sigma_bWK"))
+    s_zdWK = np.divide(s_zdW * K1, Kszd, out=o("sigma_zdWK"))
+    t_tWK = np.divide(t_tW * K1, Kt, out=o("tau_tWK"))
     two_sBd = 2.0 * sB_d
-    psi_b = s_bWK / (two_sBd - s_bWK)
-    psi_zd = s_zdWK / (two_sBd - s_zdWK)
-    psi_t = t_tWK / (two_sBd - t_tWK)
+    psi_b = np.divide(s_bWK, two_sBd - s_bWK, out=o("psi_b"))
+    psi_zd = np.divide(s_zdWK, two_sBd - s_zdWK, out=o("psi_zd"))
+    psi_t = np.divide(t_tWK, two_sBd - t_tWK, out=o("psi_t"))
     # component yield strengths (static proof)
-    k2f = np.where(di > 0, 1.0, 1.2)
-    s_zdFK = K1y * sS
-    s_bFK = k2f * s_zdFK
-    t_tFK = s_bFK / np.sqrt(3.0)
-    # stresses (W_b, W_t = 2 W_b, A computed once)
-    d2, di2 = d * d, di * di
-    wb = np.pi * (d2 * d2 - di2 * di2) / (32.0 * d)
-    area = np.pi * (d2 - di2) / 4.0
-    sba = np.asarray(moment_amplitude, dtype=float) / wb
-    tta = np.asarray(torque_amplitude, dtype=float) / (2.0 * wb)
-    ttm = np.asarray(torque_mean, dtype=float) / (2.0 * wb)
-    szm = np.asarray(axial_mean, dtype=float) / area
-    smv = np.sqrt(szm * szm + 3.0 * ttm * ttm)
-    tmv = smv / np.sqrt(3.0)
-    term_b = stress_ratio_term(sba, smv, s_bWK, s_bFK, psi_b, mean_stress_case)
-    term_t = stress_ratio_term(tta, tmv, t_tWK, t_tFK, psi_t, mean_stress_case)
-    S_f = fatigue_safety(0.0, term_b, term_t)
+    s_zdFK = np.multiply(K1y, sS, out=o("sigma_zdFK"))
+    s_bFK = np.multiply(np.where(di > 0, 1.0, 1.2), s_zdFK, out=o("sigma_bFK"))  # K2F: 1 hollow, 1.2 solid
+    t_tFK = np.divide(s_bFK, np.sqrt(3.0), out=o("tau_tFK"))
+    # nominal stresses (nominal_stresses): A, and 1/W_b with W_b = π(d⁴ − di⁴)/(32 d) = A·(d² + di²)/(8 d)
+    d2 = d * d
+    di2 = di * di
+    area = d2 - di2
+    area *= np.pi / 4.0
+    inv_wb = d2 + di2
+    inv_wb *= area
+    inv_wb = np.divide(8.0 * d, inv_wb, out=_own(inv_wb))
+    sba = np.multiply(moment_amplitude, inv_wb, out=o("sigma_ba"))
+    tta = np.multiply(0.5 * np.asarray(torque_amplitude, dtype=float), inv_wb, out=o("tau_ta"))
+    ttm = np.multiply(0.5 * np.asarray(torque_mean, dtype=float), inv_wb, out=o("tau_tm"))
+    szm = np.divide(axial_mean, area, out=o("sigma_zdm"))
+    smv = szm * szm
+    smv += 3.0 * (ttm * ttm)
+    smv = np.sqrt(smv, out=o("sigma_mv"))                                # equivalent_mean_stress
+    tmv = np.divide(smv, np.sqrt(3.0), out=o("tau_mv"))
+    if mean_stress_case == 2:  # stress_ratio_term, case 2, inlined
+        term_b = _ratio_case2(sba, smv, s_bWK, s_bFK, psi_b)
+        term_t = _ratio_case2(tta, tmv, t_tWK, t_tFK, psi_t)
+    else:
+        term_b = stress_ratio_term(sba, smv, s_bWK, s_bFK, psi_b, 1)
+        term_t = stress_ratio_term(tta, tmv, t_tWK, t_tFK, psi_t, 1)
+    # fatigue_safety (no tension-compression amplitude) and static_safety, with
+    # σ_bmax/σ_bFK = |M_max|·g and τ_tmax/τ_tFK = (√3/2)·|T_max|·g, g = 1/(W_b·σ_bFK)
     m_max = moment_amplitude if moment_max is None else moment_max
     t_max = np.abs(np.asarray(torque_mean, dtype=float)) + torque_amplitude if torque_max is None else torque_max
     f_max = axial_mean if axial_max is None else axial_max
-    S_s = static_safety(np.abs(np.asarray(f_max, dtype=float)) / area, np.abs(np.asarray(m_max, dtype=float)) / wb,
-                        np.abs(np.asarray(t_max, dtype=float)) / (2.0 * wb), s_zdFK, s_bFK, t_tFK)
+    g = inv_wb / s_bFK
+    ss = np.abs(np.asarray(f_max, dtype=float)) / area
+    ss /= s_zdFK
+    ss += np.abs(np.asarray(m_max, dtype=float)) * g
+    ss *= ss
+    g *= 0.5 * np.sqrt(3.0) * np.abs(np.asarray(t_max, dtype=float))
+    g *= g
+    ss += g
+    term_b *= term_b
+    term_t *= term_t
+    term_b += term_t
+    sf = np.sqrt(term_b, out=_own(term_b))
+    ss = np.sqrt(ss, out=_own(ss))
+    with np.errstate(divide="ignore"):  # 1/0 = inf: no load
+        S_f = np.divide(1.0, sf, out=o("fatigue_safety"))
+        S_s = np.divide(1.0, ss, out=o("static_safety"))
     return {
         "K1": K1, "K1_yield": K1y, "sigma_B_d": sB_d, "beta_sigma": bs, "beta_tau": bt, "K2": K2,
         "KF_sigma": kfs, "KF_tau": kft, "K_sigma_b": Ksb, "K_sigma_zd": Kszd, "K_tau": Kt,
@@ -595,3 +683,22 @@ def _seat(*, d, di, sigma_B_dB, sigma_S_dB, sigma_zdW_dB, sigma_bW_dB, tau_tW_dB
         "sigma_bFK": s_bFK, "sigma_zdFK": s_zdFK, "tau_tFK": t_tFK,
         "fatigue_safety": S_f, "static_safety": S_s,
     }
+
+
+def _own(x):
+    """``x`` as the ``out`` of an in-place ufunc if it is an array (a scalar result gets a new one)."""
+    return x if isinstance(x, np.ndarray) else None
+
+
+def _ratio_case2(a, m, strength_wk, strength_fk, psi_k):
+    """:func:`stress_ratio_term` for case 2 (a fresh array or scalar, 0 where a ≤ 0)."""
+    t = psi_k * m
+    t += a
+    t /= strength_wk
+    u = a + m
+    u /= strength_fk
+    t = np.maximum(t, u, out=_own(t))
+    if np.ndim(t) == 0:
+        return np.where(a > 0, t, 0.0)
+    t[~(a > 0)] = 0.0  # fewer steps than np.where when (as usual) no amplitude is zero
+    return t
