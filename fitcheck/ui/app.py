@@ -77,7 +77,9 @@ STYLE = """<style>
 [data-testid="stTable"] td, [data-testid="stTable"] th {white-space: normal; overflow-wrap: anywhere;}
 table.fc-table {width: 100%; border-collapse: collapse; font-size: 0.875rem; margin-bottom: 0.5rem;}
 table.fc-table th, table.fc-table td {border: 1px solid rgba(49, 51, 63, 0.1); padding: 0.25rem 0.5rem;
-  text-align: left; vertical-align: top; white-space: normal; overflow-wrap: anywhere;}
+  text-align: left; vertical-align: top; white-space: normal; overflow-wrap: break-word;
+  word-break: normal; hyphens: none;}
+table.fc-table td.fc-nw {white-space: nowrap;} div.fc-box {overflow-x: auto; max-width: 100%;}
 table.fc-table th {font-weight: 400; color: rgba(49, 51, 63, 0.6);}
 .fc-pass {color: #177233; font-weight: 600;} .fc-fail {color: #bd2b2b; font-weight: 600;}
 </style>"""

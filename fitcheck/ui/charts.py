@@ -82,10 +82,10 @@ def zones(df: pd.DataFrame, *, y_title: str, colors: Mapping[str, str], key: str
                "mark": {"type": "rule", "color": "#555555", "strokeWidth": 1.5},
                "encoding": {"y": {"field": "v", "type": "quantitative"}}}]
     spec = {"height": height, "layer": layers,
-            "config": {"axis": {"grid": True, "gridOpacity": 0.4}}}
+            "config": CONFIG}
     if title:
         spec["title"] = {"text": title, "fontSize": 13, "anchor": "start"}
-    st.vega_lite_chart(df, spec, width="stretch", key=key)
+    _draw(df, spec, key)
 
 
 def lines(df: pd.DataFrame, *, x: str, y: str, series: str, x_title: str, y_title: str,
@@ -123,10 +123,10 @@ def lines(df: pd.DataFrame, *, x: str, y: str, series: str, x_title: str, y_titl
     rule_layers, datasets = _rules(hrules, vrules)
     layers += rule_layers
     spec = _with_datasets({"height": height, "layer": layers,
-                           "config": {"axis": {"grid": True, "gridOpacity": 0.4}}}, datasets)
+                           "config": CONFIG}, datasets)
     if title:
         spec["title"] = {"text": title, "fontSize": 13, "anchor": "start"}
-    st.vega_lite_chart(df, spec, width="stretch", key=key)
+    _draw(df, spec, key)
 
 
 #: Dash patterns of the reference lines, one per line (they tell the lines apart in the legend).
@@ -174,6 +174,23 @@ def _with_datasets(spec: dict, datasets: dict) -> dict:
     return spec
 
 
+#: Chart style: light grid; the legends below the plot stacked one above the other (the series,
+#: then the reference lines), so a long legend is never cut at the chart's right edge.
+CONFIG = {"axis": {"grid": True, "gridOpacity": 0.4},
+          "legend": {"layout": {"bottom": {"direction": "vertical", "anchor": "start"}}}}
+
+#: Name of a chart's main data among its named datasets.
+MAIN = "table"
+
+
+def _draw(df: pd.DataFrame, spec: dict, key: str) -> None:
+    """Draw a chart; its main data travels as the named dataset :data:`MAIN` beside the
+    reference lines' datasets (the browser draws a chart whose data are all named; the spec
+    then stays the same from one rerun to the next while values change)."""
+    spec = dict(spec, data={"name": MAIN}, datasets={MAIN: df, **spec.get("datasets", {})})
+    st.vega_lite_chart(spec=spec, width="stretch", key=key)
+
+
 def waterfall(df: pd.DataFrame, *, stage: str, group: str, start: str, end: str, y_title: str,
               order: Sequence[str], hrules: Sequence[tuple] = (), key: str, height: int = 300,
               title: str = "", colors: Mapping[str, str] | None = None) -> None:
@@ -203,7 +220,7 @@ def waterfall(df: pd.DataFrame, *, stage: str, group: str, start: str, end: str,
         {"calculate": f"max(datum['{start}'], datum['{end}'])", "as": "top"}]}, datasets)
     if title:
         spec["title"] = {"text": title, "fontSize": 13, "anchor": "start"}
-    st.vega_lite_chart(df, spec, width="stretch", key=key)
+    _draw(df, spec, key)
 
 
 def unit_factor(unit: str, system: str) -> tuple[float, str]:
@@ -247,7 +264,7 @@ def histogram(hist: Mapping, *, x_title: str, scale: float = 1.0, key: str, heig
     if hist["limits"]:
         height += 40  # the legend of the lines below the chart keeps the bars their height
     spec = _with_datasets({"height": height, "layer": layers,
-                           "config": {"axis": {"grid": True, "gridOpacity": 0.4}}}, datasets)
+                           "config": CONFIG}, datasets)
     if title:
         spec["title"] = {"text": title, "fontSize": 13, "anchor": "start"}
-    st.vega_lite_chart(df, spec, width="stretch", key=key)
+    _draw(df, spec, key)

@@ -20,11 +20,12 @@ TABLE, PREFIX = "pressfit", "pf"
 
 def fields() -> list[tuple[str, list[Field]]]:
     return joints.grouped(pressfit.KEYS, [
-        ("Fit and size", [Field("fit", "Fit (ISO 286)"), "diameter", "interference_min",
-                          "interference_max", "length", "shaft_bore", "hub_outer_diameter",
-                          "module", "teeth"]),
-        ("Load and operation", ["torque", "axial_force", "speed", "temperature_shaft",
-                                "temperature_hub", "temperature_assembly"]),
+        # the first group (open) holds what a joint is checked for; the rest opens on request
+        ("Fit, size and load", [Field("fit", "Fit (ISO 286)"), "diameter", "length", "torque",
+                                "axial_force", "hub_outer_diameter"]),
+        ("Gear, shaft bore and given interference", ["module", "teeth", "shaft_bore",
+                                                     "interference_min", "interference_max"]),
+        ("Operation", ["speed", "temperature_shaft", "temperature_hub", "temperature_assembly"]),
         ("Materials and surfaces", [Field("shaft_material", material=True),
                                     Field("hub_material", material=True), "rz_shaft", "rz_hub",
                                     "smoothing_factor", "mu_slip", "mu_press"]),
@@ -80,6 +81,18 @@ def render() -> None:
     name = joints.pick_joint(TABLE, PREFIX, "press fit")
     if name is None:
         return
+    _workbench(name)
+
+
+@st.fragment
+def _workbench(name: str) -> None:
+    """Inputs and results of one joint. An input changed here reruns only this part of the page
+    (not the heading, the joint picker or the sidebar); the address is brought up to date here."""
+    _body(name)
+    state.sync_address()
+
+
+def _body(name: str) -> None:
     groups = fields()
     entry = joints.bind(TABLE, PREFIX, name, [f for _, fs in groups for f in fs])
     jr, errors, msgs = joints.evaluate(TABLE, name)
@@ -94,7 +107,7 @@ def render() -> None:
             widgets.warnings_box(msgs)
     with left:
         _class_pickers(name, entry)
-        joints.draw_inputs(TABLE, PREFIX, name, groups, pressfit.KEYS, errors, expanded=2)
+        joints.draw_inputs(TABLE, PREFIX, name, groups, pressfit.KEYS, errors, expanded=1)
     if jr is not None:
         _details(jr.result, system, name)
 
@@ -155,30 +168,33 @@ def _details(r: pressfit.PressFitResult, system: str, name: str) -> None:
     shaft_box.render(getattr(r, "shaft", None), system, key=f"{PREFIX}.shaft")
     import pandas as pd  # here, not at the top: the verdict and the figures show before it loads
 
+    st.subheader("Loosest and tightest")
+    cases = [r.loosest_operating, r.tightest_operating, r.loosest_assembly, r.tightest_assembly]
+    heads = ["loosest, operating", "tightest, operating", "loosest, assembly",
+             "tightest, assembly"]
+    if r.loosest_governing is not None and r.tightest_governing is not None:
+        # the governing operating states first: the headline figures are theirs
+        cases = [r.loosest_governing, r.tightest_governing, *cases]
+        heads = ["loosest, governing state", "tightest, governing state", *heads]
+    rows = [
+        ("interference, measured", "interference", "small_length_mm"),
+        ("interference, effective", "effective_interference", "small_length_mm"),
+        ("contact pressure", "pressure", "stress"),
+        ("torque capacity", "torque_capacity", "torque"),
+        ("axial capacity", "axial_capacity", "force"),
+        ("hub bore, tangential stress", "hub_sigma_t_bore", "stress"),
+        ("hub bore, von Mises", "hub_von_mises_bore", "stress"),
+        ("shaft, largest von Mises", "shaft_von_mises_max", "stress"),
+    ]
+    table = {"quantity": [q for q, _, _ in rows]}
+    for h, case in zip(heads, cases, strict=True):
+        table[h] = [_show_case(getattr(case, attr), kind, system) for _, attr, kind in rows]
+    widgets.static_table(pd.DataFrame(table), key=f"{PREFIX}.cases")
+    # the cases table takes the page width (seven columns); the other figures and the wall
+    # stresses sit side by side below it
     left, right = st.columns([1, 1], gap="large")
     with left:
-        st.subheader("Loosest and tightest")
-        cases = [r.loosest_operating, r.tightest_operating, r.loosest_assembly, r.tightest_assembly]
-        heads = ["loosest, operating", "tightest, operating", "loosest, assembly",
-                 "tightest, assembly"]
-        if r.loosest_governing is not None and r.tightest_governing is not None:
-            # the governing operating states first: the headline figures are theirs
-            cases = [r.loosest_governing, r.tightest_governing, *cases]
-            heads = ["loosest, governing state", "tightest, governing state", *heads]
-        rows = [
-            ("interference, measured", "interference", "small_length_mm"),
-            ("interference, effective", "effective_interference", "small_length_mm"),
-            ("contact pressure", "pressure", "stress"),
-            ("torque capacity", "torque_capacity", "torque"),
-            ("axial capacity", "axial_capacity", "force"),
-            ("hub bore, tangential stress", "hub_sigma_t_bore", "stress"),
-            ("hub bore, von Mises", "hub_von_mises_bore", "stress"),
-            ("shaft, largest von Mises", "shaft_von_mises_max", "stress"),
-        ]
-        table = {"quantity": [q for q, _, _ in rows]}
-        for h, case in zip(heads, cases, strict=True):
-            table[h] = [_show_case(getattr(case, attr), kind, system) for _, attr, kind in rows]
-        widgets.static_table(pd.DataFrame(table), key=f"{PREFIX}.cases")
+        st.subheader("Friction, hub and speeds")
         widgets.kv_table([
             ("friction μ slip / press", f"{r.mu_slip:g} / {r.mu_press:g} ({r.friction_source})"),
             ("hub outer diameter used", f"{unitsys.show(r.hub_outer_diameter, 'length', system)}"

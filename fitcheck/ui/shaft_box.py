@@ -33,5 +33,5 @@ def render(res, system: str, key: str, notes: bool = True) -> None:
                 for name, v, kind in res.loads()]
         rows.append(("loads from", res.load_source))
         widgets.kv_table(rows, key=key)
-        for n in res.notes if notes else ():
-            st.caption("• " + n)
+        if notes and res.notes:
+            st.caption("  \n".join("• " + n for n in res.notes))

@@ -16,11 +16,14 @@ from fitcheck.ui import widgets
 
 def pressfit_states(r, system: str = "SI") -> None:
     """The verdict's cause and next step, and the state governing each side of the joint."""
+    lines = []
     if getattr(r, "headline", ""):
-        st.caption(widgets.esc(widgets.prose(r.headline, system)))
+        lines.append(widgets.esc(widgets.prose(r.headline, system)))
     if getattr(r, "governing_loose_state", ""):
-        st.caption(f"Loosest: {r.governing_loose_state} · tightest (hub): {r.governing_tight_state} · "
-                   f"loosening speed: {r.loosening_speed_text}")
+        lines.append(f"Loosest: {r.governing_loose_state} · tightest (hub): "
+                     f"{r.governing_tight_state} · loosening speed: {r.loosening_speed_text}")
+    if lines:
+        st.caption("  \n".join(lines))  # one element: a rerun redraws fewer
 
 
 def bearing_clearance(r, system: str) -> None:

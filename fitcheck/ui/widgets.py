@@ -242,6 +242,10 @@ def _cell(v):
     return unitsys.num(v) if isinstance(v, float) else str(v)
 
 
+#: Cells of at most this many characters are not wrapped (a number and its unit stay together).
+SHORT_CELL = 14
+
+
 def table_html(df: pd.DataFrame) -> str:
     """A static table as HTML: every cell escaped (user text shows as typed), verdicts coloured.
 
@@ -258,10 +262,13 @@ def table_html(df: pd.DataFrame) -> str:
             text = escape(str(_cell(v)))
             if i == verdict and v in VERDICT_CLASS:
                 text = f'<span class="{VERDICT_CLASS[v]}">{text}</span>'
-            cells.append(f"<td>{text}</td>")
+            # a short cell (a value with its unit, "≥ 1.2") keeps on one line; text wraps
+            cells.append(f'<td class="fc-nw">{text}</td>' if len(str(_cell(v))) <= SHORT_CELL
+                         else f"<td>{text}</td>")
         rows.append("<tr>" + "".join(cells) + "</tr>")
-    return (f'<table class="fc-table"><thead><tr>{head}</tr></thead>'
-            f'<tbody>{"".join(rows)}</tbody></table>')
+    # the box scrolls sideways on a narrow screen rather than drawing over its neighbours
+    return (f'<div class="fc-box"><table class="fc-table"><thead><tr>{head}</tr></thead>'
+            f'<tbody>{"".join(rows)}</tbody></table></div>')
 
 
 def read_table_html(body: str) -> list[list[str]]:

@@ -25,8 +25,11 @@ def chart(el) -> tuple[pd.DataFrame, dict, dict[str, pd.DataFrame]]:
 
     import pyarrow as pa
 
-    frame = pa.ipc.open_stream(el.proto.data.data).read_pandas()
+    from fitcheck.ui.charts import MAIN
+
     named = {d.name: pa.ipc.open_stream(d.data.data).read_pandas() for d in el.proto.datasets}
+    frame = (named.pop(MAIN) if MAIN in named
+             else pa.ipc.open_stream(el.proto.data.data).read_pandas())
     return frame, json.loads(el.proto.spec), named
 
 

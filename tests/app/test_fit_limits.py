@@ -8,7 +8,7 @@ from fitcheck import fits
 from fitcheck.errors import InputError
 from fitcheck.ui import unitsys
 from fitcheck.ui.widgets import esc
-from tests.app.shown import tables
+from tests.app.shown import chart, tables
 
 PAGE = "fit_limits"
 
@@ -109,9 +109,7 @@ def test_a_negative_size_says_the_size_must_be_positive_and_abc_names_no_other_v
 
 
 def _chart_frame(el):
-    import pyarrow as pa
-
-    return pa.ipc.open_stream(el.proto.data.data).read_pandas()
+    return chart(el)[0]
 
 
 def test_the_zone_diagram_is_a_browser_chart_of_the_library_limits(app_test):

@@ -10,7 +10,6 @@ shows the library's own message by its field.
 from __future__ import annotations
 
 import copy
-import json
 import tomllib
 
 import pytest
@@ -22,7 +21,7 @@ from fitcheck.search import search_bearing_seat, search_fits
 from fitcheck.study import StudySettings, run_study
 from fitcheck.ui import unitsys
 from fitcheck.ui.widgets import esc
-from tests.app.shown import layer_rows, tables
+from tests.app.shown import chart, layer_rows, tables
 
 PAGE = "lot_study"
 PF = "gear-on-shaft"
@@ -63,9 +62,8 @@ def p_text(x: float) -> str:  # how the page prints a probability: 3 significant
 
 
 def chart_frame(el):
-    import pyarrow as pa
-
-    return pa.ipc.open_stream(el.proto.data.data).read_pandas(), json.loads(el.proto.spec)
+    frame, spec, _ = chart(el)
+    return frame, spec
 
 
 # --------------------------------------------------------------------------- page

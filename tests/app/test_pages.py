@@ -16,7 +16,7 @@ from fitcheck import case as casefile
 from fitcheck import tomlwrite
 from fitcheck.ui import app, state, unitsys
 from fitcheck.ui.widgets import esc
-from tests.app.shown import layer_rows, open_groups, tables
+from tests.app.shown import chart, layer_rows, open_groups, tables
 
 PAGES = [p.module for p in app.PAGES]
 
@@ -84,13 +84,7 @@ def test_press_fit_shows_the_library_results(app_test):
 
 def chart_data(el):
     """A browser chart's data table and the values of its reference lines."""
-    import json
-
-    import pyarrow as pa
-
-    frame = pa.ipc.open_stream(el.proto.data.data).read_pandas()
-    spec = json.loads(el.proto.spec)
-    del spec
+    frame = chart(el)[0]
     rules = [v["v"] for rows in layer_rows(el) for v in rows]
     return frame, rules
 
