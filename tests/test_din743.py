@@ -13,6 +13,7 @@ from hypothesis import given, settings
 from hypothesis import strategies as st
 
 from fitcheck.core import din743
+from fitcheck.errors import InputError
 
 SEAT = dict(d=25.0, sigma_B_dB=700.0, sigma_S_dB=490.0, group="QT", rz_um=4.0)
 
@@ -213,3 +214,113 @@ def test_inputs_of_different_shapes_broadcast():
             for k, v in rij.items():
                 assert np.shape(r[k]) == (3, 4), k
                 assert r[k][i, j] == pytest.approx(float(v), rel=1e-13), k
+
+
+# --- outputs=: only the named results, the same numbers as the full chain --------------------------------
+
+def _seat_inputs(n, seed, k_v, d_B):
+    """Every input of press_fit_seat as an n-long array (as in the test of every output above)."""
+    rng = np.random.default_rng(seed)
+    d = rng.uniform(3.0, 400.0, n)
+    sB = rng.uniform(300.0, 1400.0, n)
+    return dict(d=d, di=np.where(rng.uniform(size=n) < 0.5, 0.0, d * rng.uniform(0.0, 0.8, n)),
+                sigma_B_dB=sB, sigma_S_dB=0.75 * sB, sigma_zdW_dB=0.4 * sB,
+                sigma_bW_dB=rng.uniform(0.45, 0.55, n) * sB, tau_tW_dB=0.3 * sB, d_B=d_B,
+                d_eff=np.where(rng.uniform(size=n) < 0.5, d, rng.uniform(3.0, 400.0, n)),
+                rz_um=rng.uniform(0.2, 40.0, n), k_v=rng.uniform(1.0, 2.0, n) if k_v == "array" else k_v,
+                moment_amplitude=rng.choice([0.0, -1.0, 1.0, 1.0, 1.0], n) * rng.uniform(1e3, 1e6, n),
+                torque_mean=rng.uniform(-5e5, 5e5, n),
+                torque_amplitude=rng.choice([0.0, 1.0, 1.0], n) * rng.uniform(1e3, 5e5, n),
+                axial_mean=rng.uniform(-2e4, 2e4, n))
+
+
+def _assert_same_as_full(r, full, names):
+    # bit for bit: the chain runs the same operations whatever is asked for
+    assert list(r) == [k for k in din743.OUTPUTS if k in set(names)]
+    for k in r:
+        assert np.shape(r[k]) == np.shape(full[k]), k
+        assert np.array_equal(r[k], full[k]), k
+
+
+SUBSETS = [din743.SAFETIES_AND_NOTCH_FACTORS, ("fatigue_safety",), ("static_safety",),
+           ("fatigue_safety", "static_safety"), ("beta_sigma", "beta_tau"), ("beta_tau", "fatigue_safety"),
+           ("static_safety", "K2", "sigma_zdm"), ("psi_zd", "sigma_mv"), ("K1_yield", "KF_tau", "tau_mv")]
+
+
+@pytest.mark.parametrize("names", SUBSETS)
+@pytest.mark.parametrize("case, group, d_B, k_v", [(2, "QT", 16.0, 1.0), (1, "case", 30.0, "array"),
+                                                   (2, "structural", 16.0, 1.3)])
+@pytest.mark.parametrize("chunk", [997, 10**6])
+def test_outputs_subset_equals_the_full_chain(monkeypatch, names, case, group, d_B, k_v, chunk):
+    monkeypatch.setattr(din743, "CHUNK", chunk)
+    kw = _seat_inputs(3 * 997 + 1, 11, k_v, d_B)
+    full = din743.press_fit_seat(**kw, group=group, mean_stress_case=case)
+    r = din743.press_fit_seat(**kw, group=group, mean_stress_case=case, outputs=names)
+    _assert_same_as_full(r, full, names)
+
+
+@pytest.mark.parametrize("name", din743.OUTPUTS)
+@pytest.mark.parametrize("chunk", [997, 10**6])
+def test_each_output_alone_equals_the_full_chain(monkeypatch, name, chunk):
+    monkeypatch.setattr(din743, "CHUNK", chunk)
+    kw = _seat_inputs(3 * 997 + 1, 12, "array", 30.0)
+    full = din743.press_fit_seat(**kw)
+    _assert_same_as_full(din743.press_fit_seat(**kw, outputs=name), full, (name,))
+
+
+_PROP_INPUTS = {(k_v, d_B): _seat_inputs(2 * 997 + 5, 13, k_v, d_B) for k_v in (1.0, "array") for d_B in (16.0, 30.0)}
+
+
+@settings(max_examples=80, deadline=None)
+@given(names=st.sets(st.sampled_from(din743.OUTPUTS), min_size=1), k_v=st.sampled_from([1.0, "array"]),
+       d_B=st.sampled_from([16.0, 30.0]), case=st.sampled_from([1, 2]), chunk=st.sampled_from([997, 10**6]),
+       defaults=st.booleans(), scalar_d=st.booleans())
+def test_random_outputs_subset_equals_the_full_chain(names, k_v, d_B, case, chunk, defaults, scalar_d):
+    kw = dict(_PROP_INPUTS[(k_v, d_B)])
+    if defaults:  # DIN 743-3 ratios for the fatigue strengths, heat treated at the seat diameter
+        kw.update(sigma_zdW_dB=None, sigma_bW_dB=None, tau_tW_dB=None, d_eff=None)
+    if scalar_d:  # the tolerance-study form: geometry scalar, loads sampled
+        kw.update(d=25.0, di=0.0, rz_um=4.0)
+    saved = din743.CHUNK
+    din743.CHUNK = chunk
+    try:
+        full = din743.press_fit_seat(**kw, mean_stress_case=case)
+        r = din743.press_fit_seat(**kw, mean_stress_case=case, outputs=sorted(names))
+    finally:
+        din743.CHUNK = saved
+    _assert_same_as_full(r, full, names)
+
+
+def test_outputs_subset_with_scalar_and_differently_shaped_inputs():
+    common = dict(sigma_B_dB=700.0, sigma_S_dB=490.0, moment_amplitude=1e4, torque_mean=2e4, torque_amplitude=5e3)
+    full = din743.press_fit_seat(d=25.0, **common)
+    r = din743.press_fit_seat(d=25.0, **common, outputs=din743.SAFETIES_AND_NOTCH_FACTORS)
+    _assert_same_as_full(r, full, din743.SAFETIES_AND_NOTCH_FACTORS)
+    assert all(np.ndim(v) == 0 for v in r.values())
+    d = np.array([[12.0], [25.0], [60.0]])
+    rows = dict(rz_um=np.array([0.5, 4.0, 16.0, 40.0]), axial_mean=np.array([0.0, 300.0, -900.0, 5e3]))
+    full = din743.press_fit_seat(d=d, **rows, **common)
+    r = din743.press_fit_seat(d=d, **rows, **common, outputs=("static_safety", "beta_tau"))
+    _assert_same_as_full(r, full, ("static_safety", "beta_tau"))
+    assert r["static_safety"].shape == (3, 4)
+
+
+def test_outputs_duplicates_and_order_of_the_request():
+    r = din743.press_fit_seat(**SEAT, moment_amplitude=1e4, outputs=["static_safety", "beta_sigma", "static_safety"])
+    assert list(r) == ["beta_sigma", "static_safety"]
+
+
+@pytest.mark.parametrize("bad, shown", [(("fatigue_safety", "fatigue_safty"), "fatigue_safty"),
+                                        ("safety", "safety"), ((), "()"), (("K1", 3), "3"), (5, "5")])
+def test_unknown_outputs_raise_input_error(bad, shown):
+    with pytest.raises(InputError) as e:
+        din743.press_fit_seat(**SEAT, moment_amplitude=1e4, outputs=bad)
+    msg = str(e.value)
+    assert msg.startswith("outputs: got") and shown in msg and "allowed:" in msg
+    assert "fatigue_safety" in msg and "static_safety" in msg      # what is allowed
+    assert isinstance(e.value, ValueError)
+
+
+def test_unknown_output_suggests_the_name():
+    with pytest.raises(InputError, match="did you mean 'fatigue_safety'"):
+        din743.press_fit_seat(**SEAT, outputs=["fatigue_safty"])

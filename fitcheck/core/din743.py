@@ -37,6 +37,7 @@ import math
 
 import numpy as np
 
+from ..errors import InputError, did_you_mean
 from . import blocks as _blocks
 from .blocks import in_blocks
 
@@ -44,7 +45,7 @@ __all__ = [
     "D_BK", "K1_GROUPS", "RATIO_SIGMA_ZDW", "RATIO_SIGMA_BW", "RATIO_TAU_TW",
     "k1", "k2", "k3", "press_fit_notch_factors", "roughness_factors", "total_factor",
     "psi", "equivalent_mean_stress", "stress_ratio_term", "fatigue_safety", "static_safety",
-    "nominal_stresses", "press_fit_seat", "validity",
+    "nominal_stresses", "press_fit_seat", "validity", "OUTPUTS", "SAFETIES_AND_NOTCH_FACTORS",
 ]
 
 #: Joints per block of work in :func:`press_fit_seat` (see :mod:`fitcheck.core.blocks`)
@@ -445,10 +446,40 @@ def validity(d, sigma_B_dB, temperature=20.0):
             "temperature": (t < -40.0) | (t > 150.0)}
 
 
+#: The results of :func:`press_fit_seat`, in the order of the chain
+OUTPUTS = (
+    "K1", "K1_yield", "sigma_B_d", "beta_sigma", "beta_tau", "K2", "KF_sigma", "KF_tau",
+    "K_sigma_b", "K_sigma_zd", "K_tau", "sigma_bWK", "sigma_zdWK", "tau_tWK", "psi_b", "psi_zd", "psi_t",
+    "sigma_ba", "tau_ta", "tau_tm", "sigma_zdm", "sigma_mv", "tau_mv", "sigma_bFK", "sigma_zdFK", "tau_tFK",
+    "fatigue_safety", "static_safety",
+)
+#: The outputs a vectorised consumer (a tolerance study, a search) reads: both safeties and both
+#: notch factors; ``press_fit_seat(..., outputs=SAFETIES_AND_NOTCH_FACTORS)``
+SAFETIES_AND_NOTCH_FACTORS = ("fatigue_safety", "static_safety", "beta_sigma", "beta_tau")
+
+# the steps of _seat each output needs: k1 = K1, σ_B(d); k1y = K1 for σ_S and the component yield
+# strengths; notch = βσ, βτ, K2; rough = K_F; b, zd, t = total factor, σ_WK and ψ of bending,
+# tension-compression and torsion; wb = A and 1/W_b; stress = nominal and equivalent mean stresses
+_K, _B, _T = {"k1", "notch", "rough"}, {"b"}, {"t"}
+_STEPS: dict[str, frozenset] = {k: frozenset(v) for k, v in {
+    "K1": {"k1"}, "sigma_B_d": {"k1"}, "K1_yield": {"k1y"},
+    "beta_sigma": {"k1", "notch"}, "beta_tau": {"k1", "notch"}, "K2": {"k1", "notch"},
+    "KF_sigma": {"k1", "rough"}, "KF_tau": {"k1", "rough"},
+    **dict.fromkeys(("K_sigma_b", "sigma_bWK", "psi_b"), _K | _B),
+    **dict.fromkeys(("K_sigma_zd", "sigma_zdWK", "psi_zd"), _K | {"zd"}),
+    **dict.fromkeys(("K_tau", "tau_tWK", "psi_t"), _K | _T),
+    **dict.fromkeys(("sigma_ba", "tau_ta", "tau_tm", "sigma_zdm", "sigma_mv", "tau_mv"), {"wb", "stress"}),
+    **dict.fromkeys(("sigma_bFK", "sigma_zdFK", "tau_tFK"), {"k1y"}),
+    "fatigue_safety": _K | _B | _T | {"k1y", "wb", "stress", "fatigue"},
+    "static_safety": {"k1y", "wb", "static"},
+}.items()}
+_ALL_STEPS = frozenset().union(*_STEPS.values())
+
+
 def press_fit_seat(*, d, di=0.0, sigma_B_dB, sigma_S_dB, sigma_zdW_dB=None, sigma_bW_dB=None,
                    tau_tW_dB=None, group="QT", d_B=16.0, d_eff=None, rz_um=1.0, k_v=1.0,
                    moment_amplitude=0.0, torque_mean=0.0, torque_amplitude=0.0, axial_mean=0.0,
-                   moment_max=None, torque_max=None, axial_max=None, mean_stress_case=2):
+                   moment_max=None, torque_max=None, axial_max=None, mean_stress_case=2, outputs=None):
     r"""The whole DIN 743 chain for the shaft at the edge of a press-fitted hub (vectorised).
 
     Parameters
@@ -481,6 +512,12 @@ def press_fit_seat(*, d, di=0.0, sigma_B_dB, sigma_S_dB, sigma_zdW_dB=None, sigm
         Largest loads for the static proof; ``None``: amplitude + mean
     mean_stress_case : int
         1 or 2, see :func:`stress_ratio_term`
+    outputs : str or sequence of str, optional
+        The results to compute, by name (see Returns; :data:`OUTPUTS` lists them all); ``None``
+        (default): all. Only these are materialised, and steps of the chain that feed none of them
+        are skipped: for long arrays :data:`SAFETIES_AND_NOTCH_FACTORS` (what a tolerance study
+        or a search reads) costs markedly less than all 28. The values are those of the full run,
+        bit for bit. An unknown name raises :class:`fitcheck.errors.InputError`.
 
     Returns
     -------
@@ -489,9 +526,9 @@ def press_fit_seat(*, d, di=0.0, sigma_B_dB, sigma_S_dB, sigma_zdW_dB=None, sigm
         ``KF_tau``, ``K_sigma_b``, ``K_sigma_zd``, ``K_tau``, ``sigma_bWK``, ``sigma_zdWK``,
         ``tau_tWK``, ``psi_b``, ``psi_zd``, ``psi_t``, ``sigma_ba``, ``tau_ta``, ``tau_tm``,
         ``sigma_zdm``, ``sigma_mv``, ``tau_mv``, ``sigma_bFK``, ``sigma_zdFK``, ``tau_tFK``,
-        ``fatigue_safety``, ``static_safety`` (stresses [MPa], factors [-]). A result that depends
-        on an array input has the broadcast shape of all array inputs; one that depends on
-        scalars only is a scalar.
+        ``fatigue_safety``, ``static_safety`` (stresses [MPa], factors [-]), or those of them
+        named in ``outputs`` (in this order). A result that depends on an array input has the
+        broadcast shape of all array inputs; one that depends on scalars only is a scalar.
 
     Notes
     -----
@@ -505,11 +542,17 @@ def press_fit_seat(*, d, di=0.0, sigma_B_dB, sigma_S_dB, sigma_zdW_dB=None, sigm
     ...                    moment_amplitude=100_000.0)
     >>> round(float(r["beta_sigma"]), 3)
     2.7
+    >>> r = press_fit_seat(d=40.0, sigma_B_dB=1000.0, sigma_S_dB=800.0, group="QT", d_eff=16.0,
+    ...                    moment_amplitude=100_000.0, outputs=("fatigue_safety", "beta_sigma"))
+    >>> list(r), round(float(r["beta_sigma"]), 3)
+    (['beta_sigma', 'fatigue_safety'], 2.7)
 
     References
     ----------
     DIN 743-1/-2/-3:2012 (see the module docstring) — from memory.
     """
+    want = _wanted(outputs)
+    steps = frozenset().union(*(_STEPS[k] for k in want))
     kw = dict(d=d, di=di, sigma_B_dB=sigma_B_dB, sigma_S_dB=sigma_S_dB, sigma_zdW_dB=sigma_zdW_dB,
               sigma_bW_dB=sigma_bW_dB, tau_tW_dB=tau_tW_dB, d_B=d_B, d_eff=d_eff, rz_um=rz_um, k_v=k_v,
               moment_amplitude=moment_amplitude, torque_mean=torque_mean,
@@ -521,8 +564,26 @@ def press_fit_seat(*, d, di=0.0, sigma_B_dB, sigma_S_dB, sigma_zdW_dB=None, sigm
         # the chain works in place on its intermediate arrays
         kw.update(zip(arrays, np.broadcast_arrays(*arrays.values()), strict=True))
     # long arrays in cache-sized blocks (fitcheck.core.blocks): the same numbers, less memory traffic
-    return in_blocks(functools.partial(_seat, group=group, mean_stress_case=mean_stress_case), kw,
-                     CHUNK, full_outputs=False, direct=True)
+    return in_blocks(functools.partial(_seat, group=group, mean_stress_case=mean_stress_case, want=want,
+                                       steps=steps), kw, CHUNK, full_outputs=False, direct=True)
+
+
+def _wanted(outputs) -> tuple:
+    """The names in ``outputs`` (``None``: all), checked, once each, in the order of :data:`OUTPUTS`."""
+    if outputs is None:
+        return OUTPUTS
+    names = (outputs,) if isinstance(outputs, str) else outputs
+    allowed = "None (all) or names out of " + ", ".join(OUTPUTS)
+    try:
+        names = list(names)
+    except TypeError:
+        raise InputError("outputs", outputs, allowed) from None
+    if not names:
+        raise InputError("outputs", outputs, "at least one name out of " + ", ".join(OUTPUTS))
+    for n in names:
+        if not isinstance(n, str) or n not in _STEPS:
+            raise InputError("outputs", n, allowed, did_you_mean(n, OUTPUTS) if isinstance(n, str) else "")
+    return tuple(k for k in OUTPUTS if k in names)
 
 
 _LG7_5, _LG150, _LG20 = math.log10(7.5), math.log10(150.0), math.log10(20.0)
@@ -532,15 +593,18 @@ _U0 = 0.2 * (math.log10(2.7) - 0.43 * 3.0)          # 0.2·(lg 2.7 − 0.43·lg 
 
 def _seat(*, d, di, sigma_B_dB, sigma_S_dB, sigma_zdW_dB, sigma_bW_dB, tau_tW_dB, group, d_B, d_eff,
           rz_um, k_v, moment_amplitude, torque_mean, torque_amplitude, axial_mean, moment_max,
-          torque_max, axial_max, mean_stress_case, out=None):
+          torque_max, axial_max, mean_stress_case, want=OUTPUTS, steps=_ALL_STEPS, out=None):
     """The chain of :func:`press_fit_seat` on one block of joints (every argument given).
 
-    ``out``: optional dict of arrays the named results are written into (see
-    :func:`fitcheck.core.blocks.in_blocks`, ``direct``).
+    ``want``: the outputs to return (in the order of :data:`OUTPUTS`); ``steps``: the steps they
+    need (:data:`_STEPS`), the others are skipped. ``out``: optional dict of arrays the named
+    results are written into (see :func:`fitcheck.core.blocks.in_blocks`, ``direct``).
     """
     # The same equations as the step functions above, arranged for 10⁶-long arrays in a tolerance
     # study: every logarithm taken once (lg d, lg σ_B(d), lg Rz), constants folded, a reciprocal
     # of W_b instead of five divisions by it, each result written once into its output array.
+    # A step that feeds no wanted output is skipped; the steps that run are the same operations
+    # in the same order whatever is wanted, so every value is that of the full chain, bit for bit.
     # tests/test_din743.py checks the chain against the step functions.
     o = {}.get if out is None else out.get
     if mean_stress_case not in (1, 2):
@@ -549,140 +613,161 @@ def _seat(*, d, di, sigma_B_dB, sigma_S_dB, sigma_zdW_dB, sigma_bW_dB, tau_tW_dB
         _, a_t, a_y, d1, d0 = K1_GROUPS[group]
     except KeyError:
         raise ValueError(f"K1 group {group!r}; allowed: {', '.join(K1_GROUPS)}") from None
+    r = {}
     d = np.asarray(d, dtype=float)
     di = np.asarray(di, dtype=float)
     sB = np.asarray(sigma_B_dB, dtype=float)
-    sS = np.asarray(sigma_S_dB, dtype=float)
-    s_zdW = RATIO_SIGMA_ZDW * sB if sigma_zdW_dB is None else np.asarray(sigma_zdW_dB, dtype=float)
-    s_bW = RATIO_SIGMA_BW * sB if sigma_bW_dB is None else np.asarray(sigma_bW_dB, dtype=float)
-    t_tW = RATIO_TAU_TW * sB if tau_tW_dB is None else np.asarray(tau_tW_dB, dtype=float)
-    # K1(d_eff)/K1(d_B) for σ_B and σ_S (k1)
-    lg_d = np.log10(d)
-    lg0, lg1 = math.log10(d0), math.log10(d1)
-    x1 = np.clip(lg_d if d_eff is None else np.log10(np.asarray(d_eff, dtype=float)), lg0, lg1)
-    x1 -= lg0                                                             # lg(d_eff/d0), clipped
-    xB = float(np.clip(np.log10(d_B), lg0, lg1) - lg0)
-    if xB == 0.0:  # d_B at or below the start of the slope (the usual 16 mm): K1(d_B) = 1
-        K1 = np.subtract(1.0, a_t * x1, out=o("K1"))
-        K1y = np.subtract(1.0, a_y * x1, out=o("K1_yield"))
-    else:
-        K1 = np.divide(1.0 - a_t * x1, 1.0 - a_t * xB, out=o("K1"))
-        K1y = np.divide(1.0 - a_y * x1, 1.0 - a_y * xB, out=o("K1_yield"))
-    sB_d = np.multiply(K1, sB, out=o("sigma_B_d"))
-    lg_sBd = np.log10(sB_d)
-    # notch factors at d_BK, lg β(d_BK) = lg 2.7 + 0.43·lg(σ_B(d)/1000), and at d (K3 with β(d_BK)
-    # for α) (press_fit_notch_factors, k3); u = 0.2·lg βσ(d_BK)
-    u = 0.2 * 0.43 * lg_sBd
-    u += _U0
-    bs_bk = np.exp(u * (math.log(10.0) / 0.2))  # 10**lg βσ; exp is several times faster than power
-    xd = np.clip(lg_d, _LG7_5, _LG150, out=_own(lg_d))
-    xd -= _LG7_5
-    xd /= _LG20                                                           # lg(d/7.5)/lg 20, clipped
-    num = 1.0 - _XBK * u
-    den = u * xd
-    den = np.subtract(1.0, den, out=_own(den))
-    num /= den
-    bs = np.multiply(bs_bk, num, out=o("beta_sigma"))
-    u += 0.2 * math.log10(0.65)                                           # 0.2·lg βτ(d_BK)
-    num = (0.65 * _XBK) * u
-    num = np.subtract(0.65, num, out=_own(num))                           # 0.65·(1 − 0.2·lg βτ·x_BK)
-    den = u * xd
-    den = np.subtract(1.0, den, out=_own(den))
-    num /= den
-    bt = np.multiply(bs_bk, num, out=o("beta_tau"))
-    K2 = np.subtract(1.0, 0.2 * xd, out=o("K2"))                         # k2
-    # roughness (roughness_factors)
-    ln_rz = np.clip(np.asarray(rz_um, dtype=float), 1.0, np.inf)
-    ln_rz = np.log(ln_rz, out=_own(ln_rz))
-    kfs = lg_sBd - (_LG20 + 1.0)
-    kfs *= (-0.22 / math.log(10.0)) * ln_rz
-    kfs = np.add(1.0, kfs, out=o("KF_sigma"))
-    kft = 0.575 * kfs
-    kft = np.add(kft, 0.425, out=o("KF_tau"))
+    if "k1" in steps or "k1y" in steps or "notch" in steps:
+        # K1(d_eff)/K1(d_B) for σ_B and σ_S (k1)
+        lg_d = np.log10(d)
+        lg0, lg1 = math.log10(d0), math.log10(d1)
+        x1 = np.clip(lg_d if d_eff is None else np.log10(np.asarray(d_eff, dtype=float)), lg0, lg1)
+        x1 -= lg0                                                         # lg(d_eff/d0), clipped
+        xB = float(np.clip(np.log10(d_B), lg0, lg1) - lg0)
+        k1_dB, k1y_dB = (None, None) if xB == 0.0 else (1.0 - a_t * xB, 1.0 - a_y * xB)
+    if "k1" in steps:
+        if k1_dB is None:  # d_B at or below the start of the slope (the usual 16 mm): K1(d_B) = 1
+            K1 = r["K1"] = np.subtract(1.0, a_t * x1, out=o("K1"))
+        else:
+            K1 = r["K1"] = np.divide(1.0 - a_t * x1, k1_dB, out=o("K1"))
+        sB_d = r["sigma_B_d"] = np.multiply(K1, sB, out=o("sigma_B_d"))
+        lg_sBd = np.log10(sB_d)
+    if "notch" in steps:
+        # notch factors at d_BK, lg β(d_BK) = lg 2.7 + 0.43·lg(σ_B(d)/1000), and at d (K3 with
+        # β(d_BK) for α) (press_fit_notch_factors, k3); u = 0.2·lg βσ(d_BK)
+        u = 0.2 * 0.43 * lg_sBd
+        u += _U0
+        bs_bk = np.exp(u * (math.log(10.0) / 0.2))  # 10**lg βσ; exp is several times faster than power
+        xd = np.clip(lg_d, _LG7_5, _LG150, out=_own(lg_d))
+        xd -= _LG7_5
+        xd /= _LG20                                                       # lg(d/7.5)/lg 20, clipped
+        num = 1.0 - _XBK * u
+        den = u * xd
+        den = np.subtract(1.0, den, out=_own(den))
+        num /= den
+        bs = r["beta_sigma"] = np.multiply(bs_bk, num, out=o("beta_sigma"))
+        u += 0.2 * math.log10(0.65)                                       # 0.2·lg βτ(d_BK)
+        num = (0.65 * _XBK) * u
+        num = np.subtract(0.65, num, out=_own(num))                       # 0.65·(1 − 0.2·lg βτ·x_BK)
+        den = u * xd
+        den = np.subtract(1.0, den, out=_own(den))
+        num /= den
+        bt = r["beta_tau"] = np.multiply(bs_bk, num, out=o("beta_tau"))
+        K2 = r["K2"] = np.subtract(1.0, 0.2 * xd, out=o("K2"))           # k2
+    if "rough" in steps:
+        # roughness (roughness_factors)
+        ln_rz = np.clip(np.asarray(rz_um, dtype=float), 1.0, np.inf)
+        ln_rz = np.log(ln_rz, out=_own(ln_rz))
+        kfs = lg_sBd - (_LG20 + 1.0)
+        kfs *= (-0.22 / math.log(10.0)) * ln_rz
+        kfs = r["KF_sigma"] = np.add(1.0, kfs, out=o("KF_sigma"))
+        kft = 0.575 * kfs
+        kft = r["KF_tau"] = np.add(kft, 0.425, out=o("KF_tau"))
+    fat_b, fat_zd, fat_t = "b" in steps, "zd" in steps, "t" in steps
     # total factors (total_factor); K_V = 1 divides by nothing
     kv = None if np.ndim(k_v) == 0 and float(k_v) == 1.0 else np.asarray(k_v, dtype=float)
-    r_s = 1.0 / kfs
-    r_s -= 1.0                                                            # 1/K_Fσ − 1
-    r_t = 1.0 / kft
-    r_t -= 1.0
+    if fat_b or fat_zd:
+        r_s = 1.0 / kfs
+        r_s -= 1.0                                                        # 1/K_Fσ − 1
+    if fat_t:
+        r_t = 1.0 / kft
+        r_t -= 1.0
     if kv is None:
-        Kszd = np.add(bs, r_s, out=o("K_sigma_zd"))
-        Ksb = bs / K2
-        Ksb = np.add(Ksb, r_s, out=o("K_sigma_b"))
-        Kt = bt / K2
-        Kt = np.add(Kt, r_t, out=o("K_tau"))
+        if fat_zd:
+            Kszd = r["K_sigma_zd"] = np.add(bs, r_s, out=o("K_sigma_zd"))
+        if fat_b:
+            Ksb = bs / K2
+            Ksb = r["K_sigma_b"] = np.add(Ksb, r_s, out=o("K_sigma_b"))
+        if fat_t:
+            Kt = bt / K2
+            Kt = r["K_tau"] = np.add(Kt, r_t, out=o("K_tau"))
     else:
-        Kszd = np.divide(bs + r_s, kv, out=o("K_sigma_zd"))
-        Ksb = bs / K2
-        Ksb += r_s
-        Ksb = np.divide(Ksb, kv, out=o("K_sigma_b"))
-        Kt = bt / K2
-        Kt += r_t
-        Kt = np.divide(Kt, kv, out=o("K_tau"))
+        if fat_zd:
+            Kszd = r["K_sigma_zd"] = np.divide(bs + r_s, kv, out=o("K_sigma_zd"))
+        if fat_b:
+            Ksb = bs / K2
+            Ksb += r_s
+            Ksb = r["K_sigma_b"] = np.divide(Ksb, kv, out=o("K_sigma_b"))
+        if fat_t:
+            Kt = bt / K2
+            Kt += r_t
+            Kt = r["K_tau"] = np.divide(Kt, kv, out=o("K_tau"))
     # component fatigue limits and ψ (psi)
-    s_bWK = np.divide(s_bW * K1, Ksb, out=o("sigma_bWK"))
-    s_zdWK = np.divide(s_zdW * K1, Kszd, out=o("sigma_zdWK"))
-    t_tWK = np.divide(t_tW * K1, Kt, out=o("tau_tWK"))
-    two_sBd = 2.0 * sB_d
-    psi_b = np.divide(s_bWK, two_sBd - s_bWK, out=o("psi_b"))
-    psi_zd = np.divide(s_zdWK, two_sBd - s_zdWK, out=o("psi_zd"))
-    psi_t = np.divide(t_tWK, two_sBd - t_tWK, out=o("psi_t"))
-    # component yield strengths (static proof)
-    s_zdFK = np.multiply(K1y, sS, out=o("sigma_zdFK"))
-    s_bFK = np.multiply(np.where(di > 0, 1.0, 1.2), s_zdFK, out=o("sigma_bFK"))  # K2F: 1 hollow, 1.2 solid
-    t_tFK = np.divide(s_bFK, np.sqrt(3.0), out=o("tau_tFK"))
-    # nominal stresses (nominal_stresses): A, and 1/W_b with W_b = π(d⁴ − di⁴)/(32 d) = A·(d² + di²)/(8 d)
-    d2 = d * d
-    di2 = di * di
-    area = d2 - di2
-    area *= np.pi / 4.0
-    inv_wb = d2 + di2
-    inv_wb *= area
-    inv_wb = np.divide(8.0 * d, inv_wb, out=_own(inv_wb))
-    sba = np.multiply(moment_amplitude, inv_wb, out=o("sigma_ba"))
-    tta = np.multiply(0.5 * np.asarray(torque_amplitude, dtype=float), inv_wb, out=o("tau_ta"))
-    ttm = np.multiply(0.5 * np.asarray(torque_mean, dtype=float), inv_wb, out=o("tau_tm"))
-    szm = np.divide(axial_mean, area, out=o("sigma_zdm"))
-    smv = szm * szm
-    smv += 3.0 * (ttm * ttm)
-    smv = np.sqrt(smv, out=o("sigma_mv"))                                # equivalent_mean_stress
-    tmv = np.divide(smv, np.sqrt(3.0), out=o("tau_mv"))
-    if mean_stress_case == 2:  # stress_ratio_term, case 2, inlined
-        term_b = _ratio_case2(sba, smv, s_bWK, s_bFK, psi_b)
-        term_t = _ratio_case2(tta, tmv, t_tWK, t_tFK, psi_t)
-    else:
-        term_b = stress_ratio_term(sba, smv, s_bWK, s_bFK, psi_b, 1)
-        term_t = stress_ratio_term(tta, tmv, t_tWK, t_tFK, psi_t, 1)
-    # fatigue_safety (no tension-compression amplitude) and static_safety, with
-    # σ_bmax/σ_bFK = |M_max|·g and τ_tmax/τ_tFK = (√3/2)·|T_max|·g, g = 1/(W_b·σ_bFK)
-    m_max = moment_amplitude if moment_max is None else moment_max
-    t_max = np.abs(np.asarray(torque_mean, dtype=float)) + torque_amplitude if torque_max is None else torque_max
-    f_max = axial_mean if axial_max is None else axial_max
-    g = inv_wb / s_bFK
-    ss = np.abs(np.asarray(f_max, dtype=float)) / area
-    ss /= s_zdFK
-    ss += np.abs(np.asarray(m_max, dtype=float)) * g
-    ss *= ss
-    g *= 0.5 * np.sqrt(3.0) * np.abs(np.asarray(t_max, dtype=float))
-    g *= g
-    ss += g
-    term_b *= term_b
-    term_t *= term_t
-    term_b += term_t
-    sf = np.sqrt(term_b, out=_own(term_b))
-    ss = np.sqrt(ss, out=_own(ss))
-    with np.errstate(divide="ignore"):  # 1/0 = inf: no load
-        S_f = np.divide(1.0, sf, out=o("fatigue_safety"))
-        S_s = np.divide(1.0, ss, out=o("static_safety"))
-    return {
-        "K1": K1, "K1_yield": K1y, "sigma_B_d": sB_d, "beta_sigma": bs, "beta_tau": bt, "K2": K2,
-        "KF_sigma": kfs, "KF_tau": kft, "K_sigma_b": Ksb, "K_sigma_zd": Kszd, "K_tau": Kt,
-        "sigma_bWK": s_bWK, "sigma_zdWK": s_zdWK, "tau_tWK": t_tWK,
-        "psi_b": psi_b, "psi_zd": psi_zd, "psi_t": psi_t,
-        "sigma_ba": sba, "tau_ta": tta, "tau_tm": ttm, "sigma_zdm": szm, "sigma_mv": smv, "tau_mv": tmv,
-        "sigma_bFK": s_bFK, "sigma_zdFK": s_zdFK, "tau_tFK": t_tFK,
-        "fatigue_safety": S_f, "static_safety": S_s,
-    }
+    if fat_b or fat_zd or fat_t:
+        two_sBd = 2.0 * sB_d
+    if fat_b:
+        s_bW = RATIO_SIGMA_BW * sB if sigma_bW_dB is None else np.asarray(sigma_bW_dB, dtype=float)
+        s_bWK = r["sigma_bWK"] = np.divide(s_bW * K1, Ksb, out=o("sigma_bWK"))
+        psi_b = r["psi_b"] = np.divide(s_bWK, two_sBd - s_bWK, out=o("psi_b"))
+    if fat_zd:
+        s_zdW = RATIO_SIGMA_ZDW * sB if sigma_zdW_dB is None else np.asarray(sigma_zdW_dB, dtype=float)
+        s_zdWK = r["sigma_zdWK"] = np.divide(s_zdW * K1, Kszd, out=o("sigma_zdWK"))
+        r["psi_zd"] = np.divide(s_zdWK, two_sBd - s_zdWK, out=o("psi_zd"))
+    if fat_t:
+        t_tW = RATIO_TAU_TW * sB if tau_tW_dB is None else np.asarray(tau_tW_dB, dtype=float)
+        t_tWK = r["tau_tWK"] = np.divide(t_tW * K1, Kt, out=o("tau_tWK"))
+        psi_t = r["psi_t"] = np.divide(t_tWK, two_sBd - t_tWK, out=o("psi_t"))
+    if "k1y" in steps:
+        # component yield strengths (static proof)
+        sS = np.asarray(sigma_S_dB, dtype=float)
+        if k1y_dB is None:
+            K1y = r["K1_yield"] = np.subtract(1.0, a_y * x1, out=o("K1_yield"))
+        else:
+            K1y = r["K1_yield"] = np.divide(1.0 - a_y * x1, k1y_dB, out=o("K1_yield"))
+        s_zdFK = r["sigma_zdFK"] = np.multiply(K1y, sS, out=o("sigma_zdFK"))
+        s_bFK = r["sigma_bFK"] = np.multiply(np.where(di > 0, 1.0, 1.2), s_zdFK,  # K2F: 1 hollow, 1.2 solid
+                                             out=o("sigma_bFK"))
+        t_tFK = r["tau_tFK"] = np.divide(s_bFK, np.sqrt(3.0), out=o("tau_tFK"))
+    if "wb" in steps:
+        # nominal stresses (nominal_stresses): A, and 1/W_b with W_b = π(d⁴ − di⁴)/(32 d) = A·(d² + di²)/(8 d)
+        d2 = d * d
+        di2 = di * di
+        area = d2 - di2
+        area *= np.pi / 4.0
+        inv_wb = d2 + di2
+        inv_wb *= area
+        inv_wb = np.divide(8.0 * d, inv_wb, out=_own(inv_wb))
+    if "stress" in steps:
+        sba = r["sigma_ba"] = np.multiply(moment_amplitude, inv_wb, out=o("sigma_ba"))
+        tta = r["tau_ta"] = np.multiply(0.5 * np.asarray(torque_amplitude, dtype=float), inv_wb, out=o("tau_ta"))
+        ttm = r["tau_tm"] = np.multiply(0.5 * np.asarray(torque_mean, dtype=float), inv_wb, out=o("tau_tm"))
+        szm = r["sigma_zdm"] = np.divide(axial_mean, area, out=o("sigma_zdm"))
+        smv = szm * szm
+        smv += 3.0 * (ttm * ttm)
+        smv = r["sigma_mv"] = np.sqrt(smv, out=o("sigma_mv"))            # equivalent_mean_stress
+        tmv = r["tau_mv"] = np.divide(smv, np.sqrt(3.0), out=o("tau_mv"))
+    if "static" in steps:
+        # static_safety with σ_zdmax/σ_zdFK = |F_max|/(A·σ_zdFK), σ_bmax/σ_bFK = |M_max|·g and
+        # τ_tmax/τ_tFK = (√3/2)·|T_max|·g, g = 1/(W_b·σ_bFK)
+        m_max = moment_amplitude if moment_max is None else moment_max
+        t_max = np.abs(np.asarray(torque_mean, dtype=float)) + torque_amplitude if torque_max is None else torque_max
+        f_max = axial_mean if axial_max is None else axial_max
+        g = inv_wb / s_bFK
+        ss = np.abs(np.asarray(f_max, dtype=float)) / area
+        ss /= s_zdFK
+        ss += np.abs(np.asarray(m_max, dtype=float)) * g
+        ss *= ss
+        g *= 0.5 * np.sqrt(3.0) * np.abs(np.asarray(t_max, dtype=float))
+        g *= g
+        ss += g
+        ss = np.sqrt(ss, out=_own(ss))
+        with np.errstate(divide="ignore"):  # 1/0 = inf: no load
+            r["static_safety"] = np.divide(1.0, ss, out=o("static_safety"))
+    if "fatigue" in steps:
+        # fatigue_safety (no tension-compression amplitude)
+        if mean_stress_case == 2:  # stress_ratio_term, case 2, inlined
+            term_b = _ratio_case2(sba, smv, s_bWK, s_bFK, psi_b)
+            term_t = _ratio_case2(tta, tmv, t_tWK, t_tFK, psi_t)
+        else:
+            term_b = stress_ratio_term(sba, smv, s_bWK, s_bFK, psi_b, 1)
+            term_t = stress_ratio_term(tta, tmv, t_tWK, t_tFK, psi_t, 1)
+        term_b *= term_b
+        term_t *= term_t
+        term_b += term_t
+        sf = np.sqrt(term_b, out=_own(term_b))
+        with np.errstate(divide="ignore"):  # 1/0 = inf: no load
+            r["fatigue_safety"] = np.divide(1.0, sf, out=o("fatigue_safety"))
+    return {k: r[k] for k in want}
 
 
 def _own(x):
