@@ -449,7 +449,7 @@ def evaluate_seat(*, d: float, di: float, material: Material, rz_um: float, load
                       f"b = {loads.bearing_distance_b:g} mm)")
         if fa > 0:
             notes.append(f"the axial mesh force F_a = {fa:.4g} N is added to the shaft's static axial force "
-                         "for the shaft check; the slip check uses axial_force as given")
+                         "for the shaft check")
     else:
         M, source = 0.0, "none given"
         if module is not None and teeth is not None and torque > 0:

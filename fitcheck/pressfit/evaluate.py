@@ -139,7 +139,7 @@ def core_arguments(inp: PressFitInput) -> tuple[dict, str, str]:
         Es=s.E, nus=s.nu, alphas=s.alpha, Rps=s.Rp02, rhos=s.density,
         Eh=h.E, nuh=h.nu, alphah=h.alpha, Rph=h.Rp02, rhoh=h.density,
         mu_slip=mu_slip, mu_press=mu_press, rz_shaft=inp.rz_shaft, rz_hub=inp.rz_hub,
-        smoothing=inp.smoothing_factor, torque=inp.torque, axial_force=inp.axial_force,
+        smoothing=inp.smoothing_factor, torque=inp.torque, axial_force=inp.slip_axial_force(),
         slip_safety=inp.slip_safety, omega=inp.speed, T_shaft=inp.temperature_shaft,
         T_hub=inp.temperature_hub, T_assembly=T0,
         joining_clearance=inp.joining_clearance if inp.joining_clearance is not None else 1e-3 * d,
@@ -225,9 +225,11 @@ def evaluate(inp: PressFitInput) -> PressFitResult:
     shaft_req = inp.fracture_safety if brittle_s else inp.yield_safety
     hub_basis = "Rm / largest principal stress (brittle)" if brittle_h else "Rp0.2 / von Mises"
     shaft_basis = "Rm / largest principal stress (brittle)" if brittle_s else "Rp0.2 / von Mises"
+    F_slip, thrust_note = slip_thrust(inp)
     load_note = ("no torque or axial force given: only the contact pressure is checked"
-                 if inp.torque == 0 and inp.axial_force == 0 else
-                 f"demand √((2T/d)² + F²) with T = {inp.torque / 1000:g} N·m, F = {inp.axial_force:g} N")
+                 if inp.torque == 0 and F_slip == 0 else
+                 f"demand √((2T/d)² + F²) with T = {inp.torque / 1000:g} N·m, "
+                 + (thrust_note if thrust_note else f"F = {F_slip:g} N"))
     # what takes the interference at the governing loosest state [mm]
     loss_th = -_f(lame.thermal_interference_change(d, s.alpha, h.alpha, loosest_gov.temperature_shaft,
                                                    loosest_gov.temperature_hub, T0))
@@ -302,7 +304,7 @@ def evaluate(inp: PressFitInput) -> PressFitResult:
         name=inp.name, fit=inp.fit, diameter=d, length=inp.length, shaft_bore=inp.shaft_bore,
         hub_outer_diameter=Do, hub_outer_rule=do_rule, interference_min=imin, interference_max=imax,
         roughness_loss=loss_rz, mu_slip=mu_slip, mu_press=mu_press, friction_source=friction_source,
-        assembly=inp.assembly, torque=inp.torque, axial_force=inp.axial_force, speed=w,
+        assembly=inp.assembly, torque=inp.torque, axial_force=F_slip, speed=w,
         temperature_shaft=Ts, temperature_hub=Th, temperature_assembly=T0,
         shaft_material=s, hub_material=h, **cases,
         pressure_min=r["p_min"], pressure_max=r["p_max"], torque_capacity_min=r["torque_capacity_min"],
@@ -315,13 +317,48 @@ def evaluate(inp: PressFitInput) -> PressFitResult:
         press_force_max=r["press_force_max"], shrink_temperature_C=r["shrink_temperature"],
         joining_clearance=jc, loosening_speed=r["loosening_speed"],
         governing_tight_condition="operating" if tight_op else "assembly",
-        checks=tuple(checks), warnings=tuple(warns) + shaft.notes, shaft=shaft,
+        checks=tuple(checks),
+        warnings=tuple(warns) + ((f"slip check: {thrust_note}",) if thrust_note else ()) + shaft.notes,
+        shaft=shaft,
         design=inp.design, plastic_zone_diameter=r["plastic_zone_diameter_max"],
         plastic_utilisation=r["plastic_utilisation"], plastic_zone_limit=inp.plastic_zone_limit,
         loosest_governing=loosest_gov, tightest_governing=tightest_gov, states=tuple(states),
         governing_loose_state=state_lo, governing_tight_state=state_tight, loosening_state=state_loose,
         loosening_note=loosening_note, temperature_min=tmin, temperature_max=tmax, headline=headline,
+        axial_force_given=inp.axial_force, mesh_axial_force=inp.mesh_axial_force(),
+        mesh_thrust=inp.mesh_thrust,
     )
+
+
+def slip_thrust(inp: PressFitInput) -> tuple[float, str]:
+    """The axial force the slip check holds [N] and, for a helical gear hub, the sentence saying how.
+
+    With ``mesh_thrust = 'add'`` (default) the axial mesh force |F_a| = F_t·tan β is added to
+    ``axial_force`` as a magnitude, whatever the directions of both (the side that fails the joint);
+    with ``'ignore'`` the user states that ``axial_force`` already holds it. The same demand acts in
+    every operating state (the kernel's demand does not depend on the state).
+
+    >>> from fitcheck.pressfit import PressFitInput
+    >>> inp = PressFitInput(module=2.0, teeth=30, helix_angle=math.radians(20.0), torque=50e3,
+    ...                     axial_force=100.0)
+    >>> F, note = slip_thrust(inp)
+    >>> round(F, 1), note[:50]
+    (670.0, 'F = axial_force 100 N + |F_a| 570 N of the helical')
+    """
+    fa = inp.mesh_axial_force()
+    F = inp.slip_axial_force()
+    if fa == 0.0:
+        return F, ""
+    d = inp.module * inp.teeth / math.cos(inp.helix_angle)
+    mesh = (f"|F_a| {fa:.4g} N of the helical mesh (F_a = F_t·tan β, "
+            f"F_t = 2T/d_p = {2.0 * inp.torque / d:.4g} N, pitch diameter d_p = m·z/cos β = {d:.5g} mm, "
+            f"β = {math.degrees(inp.helix_angle):.4g}°)")
+    if inp.mesh_thrust == "add":
+        return F, (f"F = axial_force {inp.axial_force:.6g} N + {mesh} = {F:.6g} N: magnitudes added "
+                   "whatever the directions, the conservative side (mesh_thrust = 'ignore' if "
+                   "axial_force already holds it)")
+    return F, (f"F = axial_force {inp.axial_force:.6g} N as given: mesh_thrust = 'ignore' states that it "
+               f"already holds the {mesh}")
 
 
 def plastic_zone_check(d_pl: float, d: float, Do: float, limit: float) -> Check:

@@ -52,7 +52,9 @@ class PressFitResult:
     """Result of :func:`evaluate`: plain floats in core units plus the named checks.
 
     Pressures and stresses [MPa], lengths and interferences [mm], torque [N·mm],
-    forces [N], temperatures [°C], speed [rad/s].
+    forces [N], temperatures [°C], speed [rad/s]. ``axial_force`` is the axial force the slip check
+    holds: ``axial_force_given`` plus, for a helical gear hub with ``mesh_thrust = 'add'``, the
+    mesh's ``mesh_axial_force`` |F_a|.
     """
 
     name: str
@@ -116,6 +118,9 @@ class PressFitResult:
     temperature_max: float | None = None
     headline: str = ""
     shaft: _shaft.ShaftSeatResult | None = None  # the shaft at the hub edge (DIN 743)
+    axial_force_given: float | None = None  # [N] the input's axial_force (None: = axial_force)
+    mesh_axial_force: float = 0.0           # [N] |F_a| of a helical gear hub's mesh, from the torque
+    mesh_thrust: str = "add"                # whether mesh_axial_force is in axial_force ('add'/'ignore')
 
     @property
     def ok(self) -> bool:
@@ -227,6 +232,9 @@ class PressFitResult:
             "axial_capacity_min_N": self.axial_capacity_min,
             "torque_required_Nm": self.torque / 1000.0,
             "axial_force_required_N": self.axial_force,
+            "axial_force_given_N": self.axial_force if self.axial_force_given is None else self.axial_force_given,
+            "mesh_axial_force_N": self.mesh_axial_force,
+            "mesh_thrust": self.mesh_thrust,
             "slip_safety_min": self.slip_safety_min,
             "hub_stress_max_MPa": self.hub_stress_max,
             "hub_tresca_max_MPa": self.hub_tresca_max,

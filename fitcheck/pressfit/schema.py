@@ -65,6 +65,10 @@ KEYS: dict[str, str] = {
                        "from [conditions]",
     "profile_shift": "profile shift coefficient x of a gear hub given by module + teeth (default 0)",
     "helix_angle": "helix angle β of a gear hub given by module + teeth, e.g. '15 deg' (default 0)",
+    "mesh_thrust": "helical mesh thrust in the slip check: 'add' (default) adds the magnitude of the "
+                   "axial mesh force F_a = F_t·tan β (F_t = 2·torque/d_p, pitch diameter "
+                   "d_p = m·z/cos β) of a gear hub with helix_angle to axial_force, whatever the "
+                   "directions (the conservative side); 'ignore' when axial_force already holds it",
 }
 KEYS.update(_shaft.PRESSFIT_KEYS)  # the shaft at the hub edge (DIN 743), fitcheck.shaft
 
@@ -83,6 +87,10 @@ METHOD_NOTES: list[tuple[str, str]] = [
     ("Transmissible torque T = p·π·d²·L·μ/2 and axial force F = p·π·d·L·μ at the loosest case; "
      "safety against slip for the vector sum √((2T/d)² + F²)",
      "Shigley, 10th ed., sec. 7-8; DIN 7190-1:2017"),
+    ("Helical gear hub: F in the slip demand is axial_force + |F_a|, F_a = F_t·tan β, "
+     "F_t = 2T/d_p, pitch diameter d_p = m_n·z/cos β (mesh_thrust = 'add', the default: magnitudes "
+     "added whatever the directions, the conservative side; 'ignore' when axial_force already "
+     "holds it), the same in every operating state", "Shigley, 10th ed., eqs. (13-39), (13-40) — from memory"),
     ("Radial and tangential stresses in hub and shaft (Lamé) plus rotation; von Mises (plane stress) "
      "at the hub bore, the shaft surface and a hollow shaft's bore, at the tightest case",
      "Shigley, 10th ed., eqs. (3-50), (3-58), (5-12)"),
@@ -135,6 +143,7 @@ DEFAULTS = {  # core units
     "plastic_zone_limit": 0.3,  # from memory (DIN 7190-1:2017); the failing side of the choice
 }
 ASSEMBLIES = ("press", "shrink")
+MESH_THRUST = ("add", "ignore")   # the helical mesh's axial force in the slip demand (default first)
 MAX_SIZE = 10_000.0       # [mm] plausibility bound of diameters and lengths — common practice
 _T_OP = (-100.0, 500.0)       # plausibility bounds of operating temperatures — common practice
 _T_ASM = (-200.0, 600.0)      # room temperature at assembly / cooled shaft — common practice
@@ -274,6 +283,7 @@ class PressFitInput:
     temperature_max: float | None = None     # [°C] highest ambient (both parts)
     profile_shift: float = 0.0               # [-] gear hub
     helix_angle: float = 0.0                 # [rad] gear hub
+    mesh_thrust: str = "add"                 # 'add' | 'ignore': helical mesh thrust in the slip demand
     shaft_loads: _shaft.ShaftLoads = _shaft.ShaftLoads()  # shaft at the hub edge (DIN 743)
 
     # ------------------------------------------------------------------ reading
@@ -359,12 +369,16 @@ class PressFitInput:
             parse(key, lambda x, k: temperature_c(x, k, lo=_T_OP[0], hi=_T_OP[1]))
         parse("profile_shift", lambda x, k: number(x, k, lo=-1.0, hi=2.0))   # common practice range
         parse("helix_angle", lambda x, k: to_core(x, "angle", k, lo=0.0, hi=math.radians(45.0)))
+        parse("mesh_thrust", lambda x, k: _mesh_thrust(x, k))
         if "temperature_min" in v and "temperature_max" in v and v["temperature_min"] > v["temperature_max"]:
             errs.add(InputError(f"{field}.temperature_min", g("temperature_min"),
                                 f"a temperature <= temperature_max ({g('temperature_max')!r})"))
         if ("profile_shift" in mapping or "helix_angle" in mapping) and "module" not in mapping:
             errs.add(InputError(f"{field}.profile_shift" if "profile_shift" in mapping else f"{field}.helix_angle",
                                 g("profile_shift", g("helix_angle")), "only with module and teeth (a gear hub)"))
+        if mapping.get("mesh_thrust") is not None and "module" not in mapping:
+            errs.add(InputError(f"{field}.mesh_thrust", g("mesh_thrust"),
+                                "only with module, teeth and helix_angle (a helical gear hub)"))
 
         # ---- required keys and alternatives
         has_fit = "fit" in mapping
@@ -497,10 +511,33 @@ class PressFitInput:
             out["profile_shift"] = self.profile_shift
         if self.helix_angle:
             out["helix_angle"] = f"{self.helix_angle!r} rad"
+        if self.helix_angle or self.mesh_thrust != "add":  # stated wherever it acts (the report lists it)
+            out["mesh_thrust"] = self.mesh_thrust
         out.update(self.shaft_loads.to_mapping())
         return out
 
     # ------------------------------------------------------------------ derived
+    def mesh_axial_force(self) -> float:
+        """Magnitude of the axial mesh force of a helical gear hub from ``torque`` [N] (0 without one).
+
+        |F_a| = F_t·tan β with F_t = 2T/d and the reference (pitch) diameter d = m_n·z/cos β
+        (:func:`fitcheck.shaft.mesh_forces`; Shigley, 10th ed., eqs. (13-39), (13-40) — from memory),
+        from the joint's own ``torque`` (no application factor: the slip check's torque).
+
+        >>> inp = PressFitInput(module=2.0, teeth=30, helix_angle=math.radians(20.0), torque=50e3)
+        >>> round(inp.mesh_axial_force(), 1)      # d = 60/cos 20° = 63.851 mm, F_t = 1566.1 N
+        570.0
+        """
+        if self.module is None or self.teeth is None or self.helix_angle == 0.0 or self.torque == 0.0:
+            return 0.0
+        fa = _shaft.mesh_forces(self.torque, self.module, self.teeth, helix_angle=self.helix_angle)[2]
+        return abs(float(fa))
+
+    def slip_axial_force(self) -> float:
+        """The axial force the slip check holds [N]: ``axial_force`` plus, with ``mesh_thrust = 'add'``,
+        the helical mesh's |F_a| (magnitudes add whatever the directions: the conservative side)."""
+        return self.axial_force + (self.mesh_axial_force() if self.mesh_thrust == "add" else 0.0)
+
     def resolved_diameter(self) -> float:
         """Joint diameter [mm]: as given, or the fit's nominal size."""
         if self.diameter is not None:
@@ -581,6 +618,14 @@ def _design(x, key):
     s = str(x).strip().lower()
     if s not in DESIGNS:
         raise InputError(key, x, "'elastic' or 'elastic-plastic'", did_you_mean(s, DESIGNS))
+    return s
+
+
+def _mesh_thrust(x, key):
+    s = str(x).strip().lower()
+    if isinstance(x, bool) or s not in MESH_THRUST:
+        raise InputError(key, x, "'add' (the helical mesh's axial force on top of axial_force, default) or "
+                         "'ignore' (axial_force already holds it)", did_you_mean(s, MESH_THRUST))
     return s
 
 
