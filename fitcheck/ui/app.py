@@ -105,6 +105,29 @@ def frame() -> None:
         st.caption(f"fitcheck {fitcheck.__version__}")
 
 
+#: Session key: True once a session's first run has ended after its headline (:func:`first_paint`).
+FIRST_PAINT = "ui.first_paint"
+
+
+def first_paint() -> None:
+    """Call after a page's verdict and headline figures: on a session's first run, end the run
+    there with a full rerun at once, which draws the whole page (inputs, tables, charts).
+
+    A session's first run also loads the table and chart libraries and draws every element kind
+    for the first time; ending it after the headline sends the verdict and the figures to the
+    browser first, and the rest follows in the next run (already loaded, from the cached result).
+    Not in headless tests (``AppTest``), which read a page in one run.
+    """
+    ss = st.session_state
+    if ss.get(FIRST_PAINT) or st.get_option("global.appTest"):
+        return
+    ss[FIRST_PAINT] = True
+    if ss.get(state.NOTICE_SHOWN):  # the next run shows this run's one-off message again
+        ss[state.NOTICE] = ss[state.NOTICE_SHOWN]
+    state.sync_address()
+    st.rerun()
+
+
 def finish() -> None:
     """After a page: keep the case and the unit system in the address (a reload keeps the work)."""
     state.sync_address()

@@ -147,6 +147,7 @@ def _summary(r: pressfit.PressFitResult, system: str, name: str) -> None:
          f"({as_shrink})"),
     ])
     pressfit_design.show_plastic_zone(r, system)
+    app.first_paint()  # a session's first run ends here; the rest follows at once
     _capacity_chart(r, system, name)
 
 

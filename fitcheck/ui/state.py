@@ -35,6 +35,7 @@ DOC = "case.doc"            # the working document (dict)
 UNITS = "units.system"      # "SI" or "inch"
 MEMO = "units.memo"         # text written by a unit switch -> the text it replaced
 NOTICE = "case.notice"      # a one-off message (e.g. an address that could not be read)
+NOTICE_SHOWN = "case.notice.shown"  # the one-off message this run showed
 QP_CASE, QP_UNITS, QP_FIT = "case", "u", "fit"
 
 #: Widget-key prefixes of inputs that mirror the document (cleared when the document is replaced).

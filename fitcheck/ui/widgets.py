@@ -41,7 +41,10 @@ def caution() -> None:
 
 
 def notice() -> None:
-    msg = st.session_state.pop(state.NOTICE, None)
+    """A one-off message (``state.NOTICE``), shown on this run only."""
+    ss = st.session_state
+    msg = ss.pop(state.NOTICE, None)
+    ss[state.NOTICE_SHOWN] = msg  # a run ended early by app.first_paint shows it again
     if msg:
         st.info(msg)
 

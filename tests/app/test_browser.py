@@ -262,3 +262,18 @@ def test_a_direct_page_address_opens_its_page(page, server, wait_idle, path, tit
     assert page.get_by_role("heading", name=title, exact=True).is_visible()
     assert not page.get_by_text("Page not found").count()
     assert page.url.rstrip("/").endswith(path)
+
+
+def test_the_first_visit_shows_the_headline_then_the_whole_page(page, server, wait_idle):
+    """A session's first run of the press-fit page ends after its verdict and headline figures
+    (``app.first_paint``) and reruns at once: the inputs, the tables and both charts follow."""
+    page.goto(f"{server}/press-fit", wait_until="commit", timeout=FIRST)
+    page.get_by_test_id("stMetricValue").first.wait_for(timeout=FIRST)
+    r = demo_result("pressfit", "gear-on-shaft")
+    page.get_by_role("textbox", name="Torque", exact=True).wait_for(timeout=FIRST)
+    page.get_by_test_id("stVegaLiteChart").nth(1).wait_for(timeout=FIRST)
+    wait_idle(page, FIRST)
+    assert metric_value(page, "Torque capacity, loosest") == unitsys.show(
+        r.torque_capacity_min, "torque", "SI")
+    assert page.get_by_role("heading", name="Checks", exact=True).is_visible()
+    assert page.get_by_test_id("stVegaLiteChart").count() == 2
