@@ -33,10 +33,13 @@ def demo_result(table: str, name: str):
     return next(j.result for j in res.joints if j.table == table and j.name == name)
 
 
-def metric_value(pg, label: str) -> str:
-    box = pg.get_by_test_id("stMetric").filter(has=pg.get_by_test_id("stMetricLabel").get_by_text(
+def metric_box(pg, label: str):
+    return pg.get_by_test_id("stMetric").filter(has=pg.get_by_test_id("stMetricLabel").get_by_text(
         label, exact=True))
-    return box.get_by_test_id("stMetricValue").inner_text().strip()
+
+
+def metric_value(pg, label: str) -> str:
+    return metric_box(pg, label).get_by_test_id("stMetricValue").inner_text().strip()
 
 
 def open_page(pg, server, wait_idle, path: str = "") -> None:
@@ -90,10 +93,12 @@ def test_the_unit_switch_changes_the_displayed_units(page, server, wait_idle):
     assert metric_value(page, "Tightening torque M_A") == unitsys.show(r.tightening_torque,
                                                                        "torque", "SI")
     page.get_by_test_id("stSidebar").get_by_text("inch", exact=True).click()
-    page.get_by_text("lbf·in").first.wait_for(timeout=AFTER)
+    want = unitsys.show(r.tightening_torque, "torque", "inch")
+    # the inputs may read in inch units a moment before the metric cards are drawn again
+    metric_box(page, "Tightening torque M_A").get_by_test_id("stMetricValue").get_by_text(
+        want, exact=True).wait_for(timeout=AFTER)
     wait_idle(page, AFTER)
-    assert metric_value(page, "Tightening torque M_A") == unitsys.show(r.tightening_torque,
-                                                                       "torque", "inch")
+    assert metric_value(page, "Tightening torque M_A") == want
     assert metric_value(page, "Permissible preload F_M,zul").endswith("lbf")
 
 
