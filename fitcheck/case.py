@@ -802,16 +802,31 @@ class JointResult:
     def ok(self) -> bool:
         return bool(self.result.ok)
 
-    @property
-    def notes(self) -> tuple[str, ...]:
-        """Warnings given while evaluating and the notes and warnings the result carries."""
-        out = list(self.warnings)
-        for attr in ("warnings", "notes"):
+    def _texts(self, *attrs: str, caught: bool) -> tuple[str, ...]:
+        out = list(self.warnings) if caught else []
+        for attr in attrs:
             extra = getattr(self.result, attr, ())
             if isinstance(extra, str):
                 extra = (extra,)
             out.extend(str(x) for x in (extra or ()))
         return tuple(dict.fromkeys(out))
+
+    @property
+    def notes(self) -> tuple[str, ...]:
+        """Warnings given while evaluating and the notes and warnings the result carries."""
+        return self._texts("warnings", "notes", caught=True)
+
+    @property
+    def cautions(self) -> tuple[str, ...]:
+        """The warnings alone: given while evaluating, and the result's ``warnings`` (outside a
+        method's range, an input to look at)."""
+        return self._texts("warnings", caught=True)
+
+    @property
+    def information(self) -> tuple[str, ...]:
+        """The result's ``notes`` alone (the loads used, what a method assumes, a worst case shown
+        for information), without the warnings."""
+        return tuple(n for n in self._texts("notes", caught=False) if n not in self.cautions)
 
 
 @dataclass(frozen=True)
@@ -865,8 +880,13 @@ class CaseResult:
 
     @property
     def warnings(self) -> list[str]:
-        """Every joint's warnings and notes, each led by the joint's label."""
-        return [f"{j.label}: {w}" for j in self.joints for w in j.notes]
+        """Every joint's warnings, each led by the joint's label (its notes: :attr:`notes`)."""
+        return [f"{j.label}: {w}" for j in self.joints for w in j.cautions]
+
+    @property
+    def notes(self) -> list[str]:
+        """Every joint's notes (information, not warnings), each led by the joint's label."""
+        return [f"{j.label}: {n}" for j in self.joints for n in j.information]
 
     def to_dict(self) -> dict:
         return {
@@ -874,6 +894,7 @@ class CaseResult:
             "ok": self.ok,
             "checks": [c.to_dict() for c in self.checks],
             "warnings": self.warnings,
+            "notes": self.notes,
         }
 
 

@@ -108,6 +108,8 @@ def run(args) -> int:
                       f"{worst.label}, {worst.check.name}\n")
         for w in r.warnings:
             out.write(f"{p.name}: warning: {w}\n")
+        for note in r.notes:
+            out.write(f"{p.name}: note: {note}\n")
     verdict = "every check passes" if ok else f"{n_fail} of {n} checks FAIL"
     out.write(f"{n} checks: {verdict}.\n\nCAUTION: {CAUTION}\n")
     return EXIT_OK if ok else EXIT_FAILED_CHECK

@@ -111,6 +111,8 @@ def _print_joint(r, out) -> None:
             out.write(f"{c.name} fails: {c.note}\n")
     for w in r.warnings:
         out.write(f"caution: {w}\n")
+    for n in getattr(r, "notes", ()):
+        out.write(f"note: {n}\n")
     out.write(f"verdict: {'all checks pass' if r.ok else 'a check fails'}\n")
     if getattr(r, "headline", ""):
         out.write(f"{r.headline}\n")

@@ -102,7 +102,8 @@ class PressFitResult:
     loosening_speed: float
     governing_tight_condition: str
     checks: tuple[Check, ...]
-    warnings: tuple[str, ...] = ()
+    warnings: tuple[str, ...] = ()  # cautions: outside a method's range, an input to look at
+    notes: tuple[str, ...] = ()     # information: the loads used, what the method assumes
     design: str = "elastic"
     plastic_zone_diameter: float = math.nan  # [mm] at the tightest case; = diameter while elastic
     plastic_utilisation: float = 0.0         # plastic share of the hub wall / permitted share [-]
@@ -253,6 +254,7 @@ class PressFitResult:
                       ("loosest_operating", "tightest_operating", "loosest_assembly", "tightest_assembly")},
             "checks": [c.to_dict() for c in self.checks],
             "warnings": list(self.warnings),
+            "notes": list(self.notes),
             "ok": self.ok,
             "design": self.design,
             "plastic_zone_diameter_mm": self.plastic_zone_diameter,
