@@ -9,10 +9,13 @@ PORT    ?= 8501
 
 .PHONY: app test bench lint wheel clean
 
+# The package is compiled to bytecode too: pip compiles only what it copies (not an editable
+# install), and with PYTHONDONTWRITEBYTECODE set every app start would compile it again.
 $(STAMP): pyproject.toml
 	test -x $(BIN)/python || $(PY) -m venv $(VENV)
 	$(BIN)/python -m pip install --quiet --upgrade pip
 	$(BIN)/python -m pip install --quiet -e ".[test]"
+	$(BIN)/python -m compileall -q fitcheck
 	touch $(STAMP)
 
 app: $(STAMP)
