@@ -239,7 +239,10 @@ VERDICT_CLASS = {PASS: "fc-pass", FAIL: "fc-fail"}
 
 
 def _cell(v):
-    """A cell as shown: numbers the library did not format yet through ``display.num``."""
+    """A cell as shown: numbers the library did not format yet through ``display.num``; a cell a
+    row did not fill (None, or NaN from a missing key) is empty."""
+    if v is None or (isinstance(v, float) and v != v):
+        return ""
     if isinstance(v, bool) or not isinstance(v, int | float):
         return v
     return unitsys.num(v) if isinstance(v, float) else str(v)

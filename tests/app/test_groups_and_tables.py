@@ -85,6 +85,14 @@ def test_static_table_escapes_user_text_and_reads_back():
                     ["cover <b>4x</b> & co", widgets.PASS, unitsys.num(0.5)]]
 
 
+def test_a_cell_a_row_did_not_fill_is_empty():
+    # rows of checks with and without a note: pandas fills the missing note with NaN
+    df = pd.DataFrame([{"check": "a", "note": "with a note"}, {"check": "b"}])
+    rows = widgets.read_table_html(widgets.table_html(df))
+    assert rows[2] == ["b", ""]
+    assert ">nan<" not in widgets.table_html(df)
+
+
 def test_checks_table_on_the_page_equals_the_library(app_test):
     at = app_test("press_fit")
     r = casefile.evaluate(casefile.demo_case()).joints[0].result

@@ -23,8 +23,9 @@ from tests.app.shown import chart
 from tests.app.shown import tables as tables_of
 
 PF = "gear-on-shaft"
-#: a displayed number: no e-notation, no "-0", no unit spelt as pint writes it
-BAD_NUMBER = re.compile(r"\de[+-]?\d|(?<![\d.])-0(?![.\d])|\bum\b|degC|N\*m|lbf\*in|\+inf|∞")
+#: a displayed number: no e-notation, no "-0", no "nan", no unit spelt as pint writes it
+BAD_NUMBER = re.compile(r"\de[+-]?\d|(?<![\d.])-0(?![.\d])|\bum\b|degC|N\*m|lbf\*in|\+inf|∞|\bnan\b",
+                        re.IGNORECASE)
 
 
 def demo_doc() -> dict:
