@@ -116,10 +116,12 @@ def first_paint() -> None:
     A session's first run also loads the table and chart libraries and draws every element kind
     for the first time; ending it after the headline sends the verdict and the figures to the
     browser first, and the rest follows in the next run (already loaded, from the cached result).
-    Not in headless tests (``AppTest``), which read a page in one run.
+    Not without a browser: a headless ``AppTest`` reads a page in one run.
     """
     ss = st.session_state
-    if ss.get(FIRST_PAINT) or st.get_option("global.appTest"):
+    # a session without a browser behind it (a headless AppTest has no request headers) draws the
+    # whole page in one run
+    if ss.get(FIRST_PAINT) or not st.context.headers.get("Host"):
         return
     ss[FIRST_PAINT] = True
     if ss.get(state.NOTICE_SHOWN):  # the next run shows this run's one-off message again
