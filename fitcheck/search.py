@@ -43,6 +43,7 @@ from .checks import Check
 from .core import pressfit as _core
 from .errors import InputError
 from .pressfit import (
+    NAME_PLASTIC_ZONE,
     REF_HEAT,
     REF_HUB,
     REF_PRESS,
@@ -65,7 +66,6 @@ _CLASS_RE = re.compile(r"^([A-Za-z]{1,2})(\d{1,2})$")
 #: The check names of fitcheck.pressfit, so that verdicts read the same.
 CHECK_NAMES = ("slip at loosest fit", "hub yield at tightest fit", "shaft yield at tightest fit",
                "loosening speed", "hub heating temperature", "press-in force")
-PLASTIC_ZONE_CHECK = "hub plastic zone at tightest fit"  # the hub check of the elastic-plastic design
 
 
 def _grade(cls: str) -> int:
@@ -237,7 +237,7 @@ class Candidate:
     def plastic_zone_share(self) -> float | None:
         """Elastic-plastic design: the hub's plastic zone as a share of its wall at the tightest fit
         (the value its hub check judges); ``None`` in the elastic design."""
-        return next((c.value for c in self.checks if c.name == PLASTIC_ZONE_CHECK), None)
+        return next((c.value for c in self.checks if c.name == NAME_PLASTIC_ZONE), None)
 
     def to_dict(self) -> dict:
         d = {f.name: getattr(self, f.name) for f in fields(self) if f.name != "checks"}

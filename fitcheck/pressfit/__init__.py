@@ -28,6 +28,7 @@ from __future__ import annotations
 # The package is split along its seams: schema and parsing, evaluation, results. Every name other
 # modules and tests use stays importable from ``fitcheck.pressfit``.
 from .evaluate import (  # noqa: F401
+    NAME_PLASTIC_ZONE,
     _case,
     _headline,
     _why_no_pressure,

@@ -362,6 +362,10 @@ def slip_thrust(inp: PressFitInput) -> tuple[float, str]:
                f"already holds the {mesh}")
 
 
+#: Name of the elastic-plastic design's hub check (read back by the verdict and the fit search).
+NAME_PLASTIC_ZONE = "hub plastic zone at tightest fit"
+
+
 def plastic_zone_check(d_pl: float, d: float, Do: float, limit: float) -> Check:
     """The elastic-plastic design's hub check: share of the hub wall that yields at the tightest fit.
 
@@ -380,7 +384,7 @@ def plastic_zone_check(d_pl: float, d: float, Do: float, limit: float) -> Check:
             note += f"; exceeded by {depth - allowed:.3f} mm"
         if d_pl >= Do:
             note += "; the hub is fully plastic"
-    return Check("hub plastic zone at tightest fit", share, limit, "<=", "", REF_PLASTIC, note)
+    return Check(NAME_PLASTIC_ZONE, share, limit, "<=", "", REF_PLASTIC, note)
 
 
 def _why_no_pressure(imin: float, loss_rz: float, loss_th: float, loss_w: float) -> str:
@@ -400,7 +404,7 @@ def _headline(checks, r, state_lo, state_tight, state_shaft, state_loose, why_ze
     """One sentence a reviewer reads first: the verdict, its real cause, and the next step."""
     if all(c.passed for c in checks):
         slip = checks[0]
-        zone = next((c for c in checks if c.name == "hub plastic zone at tightest fit"), None)
+        zone = next((c for c in checks if c.name == NAME_PLASTIC_ZONE), None)
         hub = (f"hub yield safety {r['hub_yield_safety']:.3g}" if zone is None else
                f"hub plastic zone {zone.value:.0%} of the wall (permitted {zone.limit:.0%})")
         return (f"Holds in every operating state: slip safety {slip.value:.3g} (governing: {state_lo}), "
@@ -417,7 +421,7 @@ def _headline(checks, r, state_lo, state_tight, state_shaft, state_loose, why_ze
         else:
             out.append(f"Slips: slip safety {c.value:.3g} < {c.limit:g} at the loosest fit ({state_lo}). "
                        "Next: a tighter fit, a longer hub or a rougher, dry joint (fitcheck search)")
-    c = by.get("hub plastic zone at tightest fit")
+    c = by.get(NAME_PLASTIC_ZONE)
     if c is not None and not c.passed:
         out.append(f"The hub's plastic zone exceeds its permitted share of the wall ({state_tight}): "
                    f"{c.value:.0%} > {c.limit:.0%}. Next: a looser fit, a thicker hub or a stronger hub material")
