@@ -350,9 +350,10 @@ def slip_thrust(inp: PressFitInput) -> tuple[float, str]:
     F = inp.slip_axial_force()
     if fa == 0.0:
         return F, ""
-    d = inp.module * inp.teeth / math.cos(inp.helix_angle)
+    ft, _, _, d = (float(x) for x in _shaft.mesh_forces(inp.torque, inp.module, inp.teeth,
+                                                        helix_angle=inp.helix_angle))
     mesh = (f"|F_a| {fa:.4g} N of the helical mesh (F_a = F_t·tan β, "
-            f"F_t = 2T/d_p = {2.0 * inp.torque / d:.4g} N, pitch diameter d_p = m·z/cos β = {d:.5g} mm, "
+            f"F_t = 2T/d_p = {ft:.4g} N, pitch diameter d_p = m·z/cos β = {d:.5g} mm, "
             f"β = {math.degrees(inp.helix_angle):.4g}°)")
     if inp.mesh_thrust == "add":
         return F, (f"F = axial_force {inp.axial_force:.6g} N + {mesh} = {F:.6g} N: magnitudes added "
