@@ -162,11 +162,12 @@ def check(text: str) -> str | None:  # noqa: C901 - one linear scanner, clearest
     return None
 
 
-def parse(value: str, field: str):
+def parse(value: str, field: str, unreadable: str = "a number with a known unit, e.g. '25 mm'"):
     """Read a quantity string into a pint quantity of :data:`fitcheck.units.ureg`.
 
     The text is checked against the grammar first; anything outside it, and
-    anything pint cannot read, is an :class:`~fitcheck.errors.InputError`.
+    anything pint cannot read, is an :class:`~fitcheck.errors.InputError`
+    (``unreadable``: what the field takes, said when pint cannot read the text).
     """
     from .units import ureg
 
@@ -179,8 +180,7 @@ def parse(value: str, field: str):
     try:
         return ureg.Quantity(text)
     except Exception as exc:  # pint raises several unrelated types here
-        raise InputError(field, value, "a number with a known unit, e.g. '25 mm'",
-                         f"could not read it: {type(exc).__name__}") from None
+        raise InputError(field, value, unreadable, f"could not read it: {type(exc).__name__}") from None
 
 
 def quantity_or_none(value):

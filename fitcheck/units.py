@@ -106,7 +106,9 @@ _EXAMPLES = {
 }
 
 
-def _parse(value, field: str):
+def _parse(value, field: str, kind: str | None = None):
+    """``value`` as a pint quantity, or a plain float for a bare number; ``kind`` names, in the
+    message for a text pint cannot read, what the field takes (with its own example)."""
     if isinstance(value, pint.Quantity):
         if value._REGISTRY is not ureg:
             value = Q_(value.magnitude, str(value.units))
@@ -114,7 +116,9 @@ def _parse(value, field: str):
     if isinstance(value, str):
         from .qparse import parse  # the restricted grammar: pint never evaluates an expression
 
-        return parse(value, field)
+        if kind is None:
+            return parse(value, field)
+        return parse(value, field, f"{_article(kind)}, e.g. {_EXAMPLES[kind]}")
     if isinstance(value, bool):
         raise InputError(field, value, "a number with a unit, not true/false")
     if isinstance(value, Real | np.floating | np.integer):
@@ -225,12 +229,7 @@ def _remember(key: tuple[str, str], out: float) -> None:
 
 def _convert(value, kind: str, field: str) -> float:
     """``value`` read and converted to the core unit of ``kind`` (no range check)."""
-    try:
-        q = _parse(_offset_as_delta(value) if kind in _DELTA_KINDS else value, field)
-    except InputError as e:  # unreadable text: say what this field takes, with its own example
-        if e.allowed.startswith("a number with a known unit"):
-            raise InputError(field, value, f"{_article(kind)}, e.g. {_EXAMPLES[kind]}", e.hint) from None
-        raise
+    q = _parse(_offset_as_delta(value) if kind in _DELTA_KINDS else value, field, kind)
     if isinstance(q, float):
         return q
     try:
