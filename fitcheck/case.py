@@ -826,7 +826,8 @@ class JointResult:
     def information(self) -> tuple[str, ...]:
         """The result's ``notes`` alone (the loads used, what a method assumes, a worst case shown
         for information), without the warnings."""
-        return tuple(n for n in self._texts("notes", caught=False) if n not in self.cautions)
+        cautions = set(self.cautions)
+        return tuple(n for n in self._texts("notes", caught=False) if n not in cautions)
 
 
 @dataclass(frozen=True)

@@ -122,11 +122,10 @@ def lines(df: pd.DataFrame, *, x: str, y: str, series: str, x_title: str, y_titl
     layers.append({"mark": {"type": "line", "strokeWidth": 2}, "encoding": enc})
     rule_layers, datasets = _rules(hrules, vrules)
     layers += rule_layers
-    spec = _with_datasets({"height": height, "layer": layers,
-                           "config": CONFIG}, datasets)
+    spec = {"height": height, "layer": layers, "config": CONFIG}
     if title:
         spec["title"] = {"text": title, "fontSize": 13, "anchor": "start"}
-    _draw(df, spec, key)
+    _draw(df, spec, key, datasets)
 
 
 #: Dash patterns of the reference lines, one per line (they tell the lines apart in the legend).
@@ -168,12 +167,6 @@ def _rules(hrules: Sequence[tuple] = (), vrules: Sequence[tuple] = ()) -> tuple[
     return out, data
 
 
-def _with_datasets(spec: dict, datasets: dict) -> dict:
-    if datasets:
-        spec["datasets"] = datasets
-    return spec
-
-
 #: Chart style: light grid; the legends below the plot stacked one above the other (the series,
 #: then the reference lines), so a long legend is never cut at the chart's right edge.
 CONFIG = {"axis": {"grid": True, "gridOpacity": 0.4},
@@ -183,11 +176,11 @@ CONFIG = {"axis": {"grid": True, "gridOpacity": 0.4},
 MAIN = "table"
 
 
-def _draw(df: pd.DataFrame, spec: dict, key: str) -> None:
+def _draw(df: pd.DataFrame, spec: dict, key: str, datasets: Mapping | None = None) -> None:
     """Draw a chart; its main data travels as the named dataset :data:`MAIN` beside the
     reference lines' datasets (the browser draws a chart whose data are all named; the spec
     then stays the same from one rerun to the next while values change)."""
-    spec = dict(spec, data={"name": MAIN}, datasets={MAIN: df, **spec.get("datasets", {})})
+    spec = dict(spec, data={"name": MAIN}, datasets={MAIN: df, **(datasets or {})})
     st.vega_lite_chart(spec=spec, width="stretch", key=key)
 
 
@@ -216,11 +209,11 @@ def waterfall(df: pd.DataFrame, *, stage: str, group: str, start: str, end: str,
                "encoding": {"y": {"field": "v", "type": "quantitative"}}}]
     rule_layers, datasets = _rules(hrules)
     layers += rule_layers
-    spec = _with_datasets({"height": height, "layer": layers, "transform": [
-        {"calculate": f"max(datum['{start}'], datum['{end}'])", "as": "top"}]}, datasets)
+    spec = {"height": height, "layer": layers, "transform": [
+        {"calculate": f"max(datum['{start}'], datum['{end}'])", "as": "top"}]}
     if title:
         spec["title"] = {"text": title, "fontSize": 13, "anchor": "start"}
-    _draw(df, spec, key)
+    _draw(df, spec, key, datasets)
 
 
 def unit_factor(unit: str, system: str) -> tuple[float, str]:
@@ -263,8 +256,7 @@ def histogram(hist: Mapping, *, x_title: str, scale: float = 1.0, key: str, heig
     layers += rule_layers
     if hist["limits"]:
         height += 40  # the legend of the lines below the chart keeps the bars their height
-    spec = _with_datasets({"height": height, "layer": layers,
-                           "config": CONFIG}, datasets)
+    spec = {"height": height, "layer": layers, "config": CONFIG}
     if title:
         spec["title"] = {"text": title, "fontSize": 13, "anchor": "start"}
-    _draw(df, spec, key)
+    _draw(df, spec, key, datasets)

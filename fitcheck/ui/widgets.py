@@ -265,11 +265,12 @@ def table_html(df: pd.DataFrame) -> str:
     for values in df.itertuples(index=False, name=None):
         cells = []
         for i, v in enumerate(values):
-            text = escape(str(_cell(v)))
+            shown = str(_cell(v))
+            text = escape(shown)
             if i == verdict and v in VERDICT_CLASS:
                 text = f'<span class="{VERDICT_CLASS[v]}">{text}</span>'
             # a short cell (a value with its unit, "≥ 1.2") keeps on one line; text wraps
-            cells.append(f'<td class="fc-nw">{text}</td>' if len(str(_cell(v))) <= SHORT_CELL
+            cells.append(f'<td class="fc-nw">{text}</td>' if len(shown) <= SHORT_CELL
                          else f"<td>{text}</td>")
         rows.append("<tr>" + "".join(cells) + "</tr>")
     # the box scrolls sideways on a narrow screen rather than drawing over its neighbours
@@ -309,8 +310,9 @@ def read_table_html(body: str) -> list[list[str]]:
 
 
 def static_table(df: pd.DataFrame, key: str | None = None) -> None:
-    """A table that fits the page width and wraps its text columns (no inner scrolling, no cell
-    cut off); a number not already written as text follows ``display.num``.
+    """A table that fits the page width and wraps its text columns (no cell cut off; a table too
+    wide for its column scrolls sideways in its box); a number not already written as text
+    follows ``display.num``.
 
     Drawn as one HTML element (:func:`table_html`): the browser redraws it far faster on every
     rerun than a data table, and the server sends it without a data-frame conversion.
