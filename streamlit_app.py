@@ -7,7 +7,7 @@ from fitcheck.ui import app
 st.set_page_config(page_title="fitcheck — seats, press fits, screws", page_icon=":material/settings:",
                    layout="wide", initial_sidebar_state="expanded")
 page = st.navigation(app.pages())
-app.frame()
+app.frame(page)
 try:
     page.run()
 finally:

@@ -8,6 +8,7 @@ this package run as a script by Streamlit (it ends with
 
 from __future__ import annotations
 
+import time
 from dataclasses import dataclass
 from pathlib import Path
 
@@ -26,13 +27,17 @@ class PageSpec:
     url_path: str    # the page's address
     icon: str
     section: str
+    #: a session whose first run opens this page sees the verdict and headline figures first
+    #: (:func:`first_paint`, called by the page)
+    headline_first: bool = False
 
 
 #: Every page, in navigation order. Add a page: write fitcheck/ui/<module>.py with a render()
 #: function and the __main__ guard, then add one line here (see DEVELOPERS.md).
 PAGES: tuple[PageSpec, ...] = (
     PageSpec("fit_limits", "Fit limits", "fit-limits", ":material/straighten:", "Joints"),
-    PageSpec("press_fit", "Press fit", "press-fit", ":material/compress:", "Joints"),
+    PageSpec("press_fit", "Press fit", "press-fit", ":material/compress:", "Joints",
+             headline_first=True),
     PageSpec("bearing_seat", "Bearing seats", "bearing-seats", ":material/radio_button_checked:",
              "Joints"),
     PageSpec("housing_screws", "Housing screws", "housing-screws", ":material/hardware:", "Joints"),
@@ -85,17 +90,24 @@ table.fc-table th {font-weight: 400; color: rgba(49, 51, 63, 0.6);}
 </style>"""
 
 
-def frame() -> None:
-    """Before a page: open the working case, draw the sidebar (unit system, case name)."""
+def frame(page=None) -> None:
+    """Before a page: open the working case, draw the sidebar (unit system, case name).
+
+    ``page`` is the ``st.Page`` about to run (from ``st.navigation``): on a session's first run
+    of a page that shows its headline first, this run draws no more than the headline
+    (:func:`headline_only`)."""
     st.html(STYLE)
     state.init()
     ss = st.session_state
+    _plan_first_paint(page)
+    ss.setdefault("ui.units", state.system())
     with st.sidebar:
-        ss.setdefault("ui.units", state.system())
-        st.segmented_control("Units", unitsys.SYSTEMS, key="ui.units", on_change=state.switch_units,
-                             required=True, help="Inputs and results in SI (mm, N, MPa, N·m) or "
-                             "inch units (in, lbf, ksi, lbf·in). Inputs are rewritten in the "
-                             "new units; switching back restores what you typed.")
+        if not headline_only():  # the unit switch follows with the rest of the page
+            st.segmented_control("Units", unitsys.SYSTEMS, key="ui.units",
+                                 on_change=state.switch_units, required=True,
+                                 help="Inputs and results in SI (mm, N, MPa, N·m) or inch units "
+                                 "(in, lbf, ksi, lbf·in). Inputs are rewritten in the new units; "
+                                 "switching back restores what you typed.")
         title = state.doc().get("title", {})
         if isinstance(title, dict) and title:
             parts = [str(title.get(k, "")) for k in ("project", "part") if title.get(k)]
@@ -105,33 +117,75 @@ def frame() -> None:
         st.caption(f"fitcheck {fitcheck.__version__}")
 
 
-#: Session key: True once a session's first run has ended after its headline (:func:`first_paint`).
-FIRST_PAINT = "ui.first_paint"
+#: Session key: set by a session's first run (:func:`frame`).
+SEEN = "ui.first_run_done"
+#: Session key: True while this run is a session's first run that draws only the headline.
+HEADLINE_ONLY = "ui.headline_only"
+#: Pause [s] between a headline-only run and the run that draws the whole page. The whole page
+#: imports the table and chart libraries and sends about forty elements (≈ 0.5 s of server CPU,
+#: then as much browser work); started at once, it competed with the browser still loading and
+#: drawing the headline's elements, and the figures showed 0.2-0.7 s later.
+FIRST_PAINT_PAUSE_S = 0.25
+
+
+def _plan_first_paint(page) -> None:
+    """Decide, at the top of each run, whether it draws only the headline: a session's first run
+    (with a browser behind it: a headless ``AppTest`` has no request headers and reads a page in
+    one run) of a page whose :class:`PageSpec` says ``headline_first``."""
+    ss = st.session_state
+    first = not ss.get(SEEN)
+    ss[SEEN] = True
+    url = getattr(page, "url_path", None)
+    ss[HEADLINE_ONLY] = bool(first and url and _has_browser()
+                             and any(p.headline_first and p.url_path == url for p in PAGES))
+
+
+_pause = time.sleep  # the pause after a headline-only run (a test records it instead)
+
+
+def _has_browser() -> bool:
+    """Whether a browser is behind this session (a headless ``AppTest`` sends no headers)."""
+    return bool(st.context.headers.get("Host"))
+
+
+def headline_only() -> bool:
+    """True when this run draws only the page's verdict and headline figures (a session's first
+    run of a ``headline_first`` page): controls that are not needed to read them (the unit switch,
+    the joint picker, links) are left to the next run, which follows by itself."""
+    return bool(st.session_state.get(HEADLINE_ONLY))
 
 
 def first_paint() -> None:
-    """Call after a page's verdict and headline figures: on a session's first run, end the run
-    there with a full rerun at once, which draws the whole page (inputs, tables, charts).
+    """Call after a page's verdict and headline figures: in a headline-only run
+    (:func:`headline_only`) the run ends here and, after a short pause, reruns in full (inputs,
+    tables, charts); otherwise nothing happens.
 
-    A session's first run also loads the table and chart libraries and draws every element kind
-    for the first time; ending it after the headline sends the verdict and the figures to the
-    browser first, and the rest follows in the next run (already loaded, from the cached result).
-    Not without a browser: a headless ``AppTest`` reads a page in one run.
+    A session's first run also imports the library and draws every element kind for the first
+    time. Ending it after the headline sends the verdict and the figures to the browser first,
+    with only the element kinds they need; the pause (:data:`FIRST_PAINT_PAUSE_S`) leaves the
+    server and the processor to the browser while it loads and draws them, and the rest follows
+    in the next run (the result is cached).
     """
     ss = st.session_state
-    # a session without a browser behind it (a headless AppTest has no request headers) draws the
-    # whole page in one run
-    if ss.get(FIRST_PAINT) or not st.context.headers.get("Host"):
+    if not ss.get(HEADLINE_ONLY):
         return
-    ss[FIRST_PAINT] = True
+    ss[HEADLINE_ONLY] = False
     if ss.get(state.NOTICE_SHOWN):  # the next run shows this run's one-off message again
         ss[state.NOTICE] = ss[state.NOTICE_SHOWN]
     state.sync_address()
+    _pause(FIRST_PAINT_PAUSE_S)
     st.rerun()
 
 
 def finish() -> None:
-    """After a page: keep the case and the unit system in the address (a reload keeps the work)."""
+    """After a page: keep the case and the unit system in the address (a reload keeps the work).
+
+    A headline-only run whose page ended before its headline (an input error, a case without a
+    joint of the page's kind) reruns at once, so the controls it left out are drawn."""
+    ss = st.session_state
+    if ss.get(HEADLINE_ONLY):
+        ss[HEADLINE_ONLY] = False
+        st.rerun()
     state.sync_address()
 
 

@@ -26,7 +26,7 @@ from fitcheck import case as casefile
 from fitcheck import materials
 from fitcheck.errors import InputError, InputErrors
 from fitcheck.tomlread import read_toml_bytes
-from fitcheck.ui import state, unitsys, widgets
+from fitcheck.ui import app, state, unitsys, widgets
 
 AS_IN_FILE = "(as in the case file)"
 
@@ -94,6 +94,8 @@ def pick_joint(table: str, prefix: str, what: str) -> str | None:
     stored = st.session_state.get(f"{key}.value")
     if st.session_state.get(key) not in ns:
         st.session_state[key] = stored if stored in ns else ns[0]
+    if app.headline_only():  # the picker follows with the rest of the page
+        return st.session_state[key]
     c = st.columns([3, 2], vertical_alignment="bottom")
     chosen = c[0].selectbox(f"{what.capitalize()} of the case", ns, key=key)
     st.session_state[f"{key}.value"] = chosen

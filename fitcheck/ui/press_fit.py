@@ -115,7 +115,7 @@ def _body(name: str) -> None:
 def _summary(r: pressfit.PressFitResult, system: str, name: str) -> None:
     widgets.verdict_banner(r.ok, checks.worst(r.checks), system, checks=r.checks, table=TABLE,
                            name=name)
-    if r.ok:
+    if r.ok and not app.headline_only():  # the link follows with the rest of the page
         widgets.search_link(TABLE, name)
     verdicts.pressfit_states(r, system)
     st.subheader(f"{widgets.esc(r.name or 'Joint')}: {widgets.esc(r.fit or 'given interference')}, "
@@ -147,7 +147,7 @@ def _summary(r: pressfit.PressFitResult, system: str, name: str) -> None:
          f"({as_shrink})"),
     ])
     pressfit_design.show_plastic_zone(r, system)
-    app.first_paint()  # a session's first run ends here; the rest follows at once
+    app.first_paint()  # a session's first run ends here; the rest follows by itself
     _capacity_chart(r, system, name)
 
 

@@ -270,8 +270,9 @@ def test_a_direct_page_address_opens_its_page(page, server, wait_idle, path, tit
 
 
 def test_the_first_visit_shows_the_headline_then_the_whole_page(page, server, wait_idle):
-    """A session's first run of the press-fit page ends after its verdict and headline figures
-    (``app.first_paint``) and reruns at once: the inputs, the tables and both charts follow."""
+    """A session's first run of the press-fit page draws its verdict and headline figures only
+    (``app.first_paint``) and reruns after a short pause: the unit switch, the joint picker, the
+    inputs, the tables and both charts follow by themselves."""
     page.goto(f"{server}/press-fit", wait_until="commit", timeout=FIRST)
     page.get_by_test_id("stMetricValue").first.wait_for(timeout=FIRST)
     r = demo_result("pressfit", "gear-on-shaft")
@@ -282,3 +283,6 @@ def test_the_first_visit_shows_the_headline_then_the_whole_page(page, server, wa
         r.torque_capacity_min, "torque", "SI")
     assert page.get_by_role("heading", name="Checks", exact=True).is_visible()
     assert page.get_by_test_id("stVegaLiteChart").count() == 2
+    assert page.get_by_test_id("stSidebar").get_by_text("inch", exact=True).is_visible()
+    assert page.get_by_text("Press fit of the case").first.is_visible()
+    assert page.get_by_text("Search fits for this joint").first.is_visible()
