@@ -15,7 +15,7 @@ Goals (issue 15): median ≤ 250 ms on the press-fit page and ≤ 400 ms on ever
 ≤ 3 s and within 1.3× of the bare page. Asserts nothing: the figures depend on the machine, so
 compare them with the bare page of the same run.
 
-Usage: ``python bench/bench_ui.py [--n 12] [--pages press-fit ...] [--no-bare]``
+Usage: ``python bench/bench_ui.py [--n 12] [--pages press-fit ...] [--no-bare] [--starts K]``
 """
 
 from __future__ import annotations
@@ -244,6 +244,25 @@ def _ms(xs: list[tuple[float, float, float]]) -> str:
             f" CPU median: server {cpu * 1000:4.0f} ms, browser {bcpu * 1000:4.0f} ms")
 
 
+def first_results(browser, bare: Path, k: int) -> None:
+    """Start the bare page and the app ``k`` times in turn and print each first result, then the
+    median and the largest ratio app / bare (a start's figure varies by ± 0.3 s on a quiet machine
+    with the files the server reads, so one pair of starts decides little)."""
+    ratios = []
+    for i in range(k):
+        with served(bare) as (base, t0, _pid):
+            b = first_result(browser, base, t0, "")
+        time.sleep(0.5)
+        with served(APP) as (base, t0, _pid):
+            a = first_result(browser, base, t0, "press-fit")
+        time.sleep(0.5)
+        ratios.append(a / b)
+        print(f"start {i + 1}/{k}: first result: bare page {b:.2f} s, app {a:.2f} s ({a / b:.2f}×)",
+              flush=True)
+    print(f"first result over {k} starts: median {statistics.median(ratios):.2f}×, largest "
+          f"{max(ratios):.2f}× the bare page (goal ≤ 1.3×)", flush=True)
+
+
 def main(argv: list[str] | None = None) -> None:
     ap = argparse.ArgumentParser(description=__doc__.splitlines()[0])
     ap.add_argument("--n", type=int, default=12, help="interactions per page (after 2 warm-up)")
@@ -251,6 +270,10 @@ def main(argv: list[str] | None = None) -> None:
                     help="measure only these pages (default: all)")
     ap.add_argument("--no-bare", action="store_true",
                     help="skip the bare page (its figures are then not printed)")
+    ap.add_argument("--starts", type=int, default=1, metavar="K",
+                    help="start the bare page and the app K times in turn (first result only) "
+                    "before the interactions are measured, and print the median and the largest "
+                    "ratio (default 1: one start each, with the interactions)")
     args = ap.parse_args(argv)
     if CHROMIUM is None:
         print("Chromium not found (/usr/bin/chromium): nothing measured")
@@ -264,6 +287,8 @@ def main(argv: list[str] | None = None) -> None:
     with sync_playwright() as pw:
         browser = pw.chromium.launch(executable_path=CHROMIUM, headless=True, args=ARGS)
         try:
+            if args.starts > 1 and not args.no_bare:
+                first_results(browser, bare, args.starts - 1)
             bare_first = bare_cpu = float("nan")
             if not args.no_bare:
                 with served(bare) as (base, t0, pid):
