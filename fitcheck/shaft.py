@@ -406,7 +406,8 @@ def _applies(m: Material) -> bool:
 
 def evaluate_seat(*, d: float, di: float, material: Material, rz_um: float, loads: ShaftLoads,
                   torque: float, axial_force: float, temperature: float, what: str,
-                  module: float | None = None, teeth: int | None = None) -> ShaftSeatResult:
+                  module: float | None = None, teeth: int | None = None,
+                  add_mesh_thrust: bool = True) -> ShaftSeatResult:
     """DIN 743 fatigue and static safety of the shaft at one seat (scalar inputs, core units).
 
     Parameters
@@ -427,6 +428,10 @@ def evaluate_seat(*, d: float, di: float, material: Material, rz_um: float, load
         "gear hub", "bearing ring" ... for the notes
     module, teeth : optional
         Gear data (normal module [mm], teeth) for deriving the mesh forces
+    add_mesh_thrust : bool
+        Whether the axial mesh force F_a derived from the gear data is added to ``axial_force``
+        (default, the conservative side); False when ``axial_force`` already holds it (a press
+        fit's ``mesh_thrust = 'ignore'``). Its couple F_a·d/2 in the bending moment stays either way.
     """
     KA = loads.application_factor
     T = KA * torque
@@ -447,9 +452,12 @@ def evaluate_seat(*, d: float, di: float, material: Material, rz_um: float, load
             M = float(seat_moment(ft, fr, fa, dw, loads.bearing_distance_a, loads.bearing_distance_b))
             source = (f"gear mesh, two supports (a = {loads.bearing_distance_a:g} mm, "
                       f"b = {loads.bearing_distance_b:g} mm)")
-        if fa > 0:
+        if fa > 0 and add_mesh_thrust:
             notes.append(f"the axial mesh force F_a = {fa:.4g} N is added to the shaft's static axial force "
                          "for the shaft check")
+        elif fa > 0:
+            notes.append(f"the axial mesh force F_a = {fa:.4g} N is taken as part of the given axial force "
+                         "(mesh_thrust = 'ignore'); its couple F_a·d/2 is in the bending moment")
     else:
         M, source = 0.0, "none given"
         if module is not None and teeth is not None and torque > 0:
@@ -457,7 +465,7 @@ def evaluate_seat(*, d: float, di: float, material: Material, rz_um: float, load
                          "the shaft check at the hub edge takes no bending moment, although the mesh forces "
                          "of a loaded gear always bend its seat; give bearing_distance_a and "
                          "bearing_distance_b (or overhang) to derive it, or bending_moment")
-    F = KA * axial_force + fa
+    F = KA * axial_force + (fa if add_mesh_thrust else 0.0)
     tt = loads.torque_type
     t_mean = {"static": T, "pulsating": T / 2.0, "alternating": 0.0}[tt]
     t_amp = T - t_mean

@@ -222,3 +222,22 @@ def test_round_trip_of_the_input_and_the_case_file(value):
 def test_key_is_documented():
     assert "mesh_thrust" in pressfit.KEYS and "'ignore'" in pressfit.KEYS["mesh_thrust"]
     assert any("mesh_thrust" in step for step, _ in pressfit.METHOD_NOTES)
+
+
+def test_the_shaft_check_counts_the_mesh_thrust_once():
+    """The DIN 743 check at the hub edge adds the mesh's axial force to ``axial_force`` with
+    ``mesh_thrust = 'add'`` and takes ``axial_force`` alone with ``'ignore'`` (which states that it
+    already holds the thrust); the couple F_a·d/2 stays in the bending moment either way."""
+    # F_a = F_t·tan β = 2349.23·tan 20° = 855.05 N (test_helical_gear_seat_slip_demand_by_hand);
+    # K_A = 1 (default application factor)
+    supports = {"bearing_distance_a": "15 mm", "bearing_distance_b": "45 mm"}
+    _, added = _eval(**supports)
+    _, ignored = _eval(mesh_thrust="ignore", **supports)
+    assert added.shaft.mesh_axial == pytest.approx(855.05, abs=0.01)
+    assert added.shaft.axial_force == pytest.approx(300.0 + 855.05, abs=0.01)
+    assert ignored.shaft.axial_force == 300.0
+    assert ignored.shaft.bending_moment == added.shaft.bending_moment  # the couple stays
+    assert any("taken as part of the given axial force" in n for n in ignored.shaft.notes)
+    assert not any("is added to the shaft's static axial force" in n for n in ignored.shaft.notes)
+    # less axial stress with 'ignore': its fatigue safety is never below that of 'add'
+    assert ignored.shaft.fatigue_safety >= added.shaft.fatigue_safety

@@ -452,4 +452,5 @@ def shaft_at_hub_edge(inp: PressFitInput, d: float):
     return _shaft.evaluate_seat(d=d, di=inp.shaft_bore, material=inp.shaft_material,
                                 rz_um=inp.rz_shaft * 1000.0, loads=inp.shaft_loads, torque=inp.torque,
                                 axial_force=inp.axial_force, temperature=inp.temperature_shaft, what="hub",
-                                module=inp.module, teeth=inp.teeth)
+                                module=inp.module, teeth=inp.teeth,
+                                add_mesh_thrust=inp.mesh_thrust == "add")

@@ -65,7 +65,8 @@ KEYS: dict[str, str] = {
                        "from [conditions]",
     "profile_shift": "profile shift coefficient x of a gear hub given by module + teeth (default 0)",
     "helix_angle": "helix angle β of a gear hub given by module + teeth, e.g. '15 deg' (default 0)",
-    "mesh_thrust": "helical mesh thrust in the slip check: 'add' (default) adds the magnitude of the "
+    "mesh_thrust": "helical mesh thrust in the slip check and the shaft check: 'add' (default) "
+                   "adds the magnitude of the "
                    "axial mesh force F_a = F_t·tan β (F_t = 2·torque/d_p, pitch diameter "
                    "d_p = m·z/cos β) of a gear hub with helix_angle to axial_force, whatever the "
                    "directions (the conservative side); 'ignore' when axial_force already holds it",
