@@ -35,7 +35,8 @@ class PageSpec:
 #: Every page, in navigation order. Add a page: write fitcheck/ui/<module>.py with a render()
 #: function and the __main__ guard, then add one line here (see DEVELOPERS.md).
 PAGES: tuple[PageSpec, ...] = (
-    PageSpec("fit_limits", "Fit limits", "fit-limits", ":material/straighten:", "Joints"),
+    PageSpec("fit_limits", "Fit limits", "fit-limits", ":material/straighten:", "Joints",
+             headline_first=True),
     PageSpec("press_fit", "Press fit", "press-fit", ":material/compress:", "Joints",
              headline_first=True),
     PageSpec("bearing_seat", "Bearing seats", "bearing-seats", ":material/radio_button_checked:",
@@ -131,13 +132,17 @@ FIRST_PAINT_PAUSE_S = 0.25
 def _plan_first_paint(page) -> None:
     """Decide, at the top of each run, whether it draws only the headline: a session's first run
     (with a browser behind it: a headless ``AppTest`` has no request headers and reads a page in
-    one run) of a page whose :class:`PageSpec` says ``headline_first``."""
+    one run) of a page whose :class:`PageSpec` says ``headline_first``. The bare address's hidden
+    start page draws nothing and does not count: the page it opens is the session's first."""
     ss = st.session_state
+    url = getattr(page, "url_path", None)
+    spec = next((p for p in PAGES if p.url_path == url), None)
+    if spec is None:
+        ss[HEADLINE_ONLY] = False
+        return
     first = not ss.get(SEEN)
     ss[SEEN] = True
-    url = getattr(page, "url_path", None)
-    ss[HEADLINE_ONLY] = bool(first and url and _has_browser()
-                             and any(p.headline_first and p.url_path == url for p in PAGES))
+    ss[HEADLINE_ONLY] = bool(first and spec.headline_first and _has_browser())
 
 
 _pause = time.sleep  # the pause after a headline-only run (a test records it instead)

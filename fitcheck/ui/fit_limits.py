@@ -132,36 +132,19 @@ def render() -> None:
     ss.setdefault(K_TEXT, designation(v))
     ss.setdefault(K_SIZE, v["size"])
 
+    size_error = None
+    holes = shafts = []
+    try:
+        size_mm = to_core(ss[K_SIZE], "length", "nominal size", lo=0.0, lo_open=True)
+        holes = _classes(size_mm, "hole")
+        shafts = _classes(size_mm, "shaft")
+    except InputError as e:
+        size_error = e
+    prefs = _preferred()
     left, right = st.columns([1, 2], gap="large")
     with left:
-        st.subheader("The fit")
-        st.text_input("Designation", key=K_TEXT, on_change=_on_text,
-                      help="Nominal size, hole class and/or shaft class, e.g. '25 H7/p6', "
-                      "'40 k6', '1 in H7/g6'. Press Enter to apply.")
-        if ss.get("fl.text_error") is not None:
-            st.error(widgets.error_text(ss["fl.text_error"]), icon=":material/error:")
-        st.caption("…or pick:")
-        st.text_input("Nominal size", key=K_SIZE, on_change=_on_pick,
-                      help="A length with its unit: '25 mm' or '0.984 in' (a bare number is mm).")
-        size_error = None
-        holes = shafts = []
-        try:
-            size_mm = to_core(ss[K_SIZE], "length", "nominal size", lo=0.0, lo_open=True)
-            holes = _classes(size_mm, "hole")
-            shafts = _classes(size_mm, "shaft")
-        except InputError as e:
-            size_error = e
-        if size_error is not None:
-            st.error(widgets.error_text(size_error), icon=":material/error:")
-        c1, c2 = st.columns(2)
-        with c1:
-            _class_select("Hole class", K_HOLE, [NONE, *holes], v["hole"])
-        with c2:
-            _class_select("Shaft class", K_SHAFT, [NONE, *shafts], v["shaft"])
-        prefs = _preferred()
-        st.selectbox("Preferred fits", [_pref_label(p) for p in prefs], key=K_PREF, index=None,
-                     placeholder="apply a preferred fit…", on_change=_on_pref,
-                     help="Preferred hole-basis and shaft-basis fits; picking one sets both classes.")
+        if not app.headline_only():  # the inputs follow with the rest of the page
+            _inputs(v, size_error, holes, shafts, prefs)
     v = ss[STORE]
     state.remember(state.QP_FIT, None if v == DEFAULT else designation(v))
 
@@ -187,6 +170,30 @@ def render() -> None:
     with st.expander("Preferred fits", expanded=False):
         widgets.static_table(pd.DataFrame([{"basis": p.basis, "fit": p.fit, "use": p.description,
                                             "source": p.source} for p in prefs]), key="fl.pref_table")
+
+
+def _inputs(v: dict, size_error, holes: list[str], shafts: list[str],
+            prefs: list[fits.PreferredFit]) -> None:
+    ss = st.session_state
+    st.subheader("The fit")
+    st.text_input("Designation", key=K_TEXT, on_change=_on_text,
+                  help="Nominal size, hole class and/or shaft class, e.g. '25 H7/p6', "
+                  "'40 k6', '1 in H7/g6'. Press Enter to apply.")
+    if ss.get("fl.text_error") is not None:
+        st.error(widgets.error_text(ss["fl.text_error"]), icon=":material/error:")
+    st.caption("…or pick:")
+    st.text_input("Nominal size", key=K_SIZE, on_change=_on_pick,
+                  help="A length with its unit: '25 mm' or '0.984 in' (a bare number is mm).")
+    if size_error is not None:
+        st.error(widgets.error_text(size_error), icon=":material/error:")
+    c1, c2 = st.columns(2)
+    with c1:
+        _class_select("Hole class", K_HOLE, [NONE, *holes], v["hole"])
+    with c2:
+        _class_select("Shaft class", K_SHAFT, [NONE, *shafts], v["shaft"])
+    st.selectbox("Preferred fits", [_pref_label(p) for p in prefs], key=K_PREF, index=None,
+                 placeholder="apply a preferred fit…", on_change=_on_pref,
+                 help="Preferred hole-basis and shaft-basis fits; picking one sets both classes.")
 
 
 def _class_select(label: str, key: str, options: list[str], current: str) -> None:
@@ -220,6 +227,7 @@ def _show_fit(f: fits.Fit, system: str) -> None:
                         help="shaft upper limit − hole lower limit")
         c[2].metric("Fit tolerance", show(f.fit_tolerance_um),
                     help="sum of the hole and shaft tolerances")
+    app.first_paint()  # a session's first run ends here; the rest follows by itself
     import pandas as pd
 
     zones = [z for z in (f.hole, f.shaft) if z is not None]

@@ -286,3 +286,19 @@ def test_the_first_visit_shows_the_headline_then_the_whole_page(page, server, wa
     assert page.get_by_test_id("stSidebar").get_by_text("inch", exact=True).is_visible()
     assert page.get_by_text("Press fit of the case").first.is_visible()
     assert page.get_by_text("Search fits for this joint").first.is_visible()
+
+
+def test_the_bare_address_shows_the_fit_limits_headline_then_the_whole_page(page, server, wait_idle):
+    """``/`` opens the fit-limits page; the session's first run there draws the fit's figures only
+    and the inputs, the limits table and the zone chart follow by themselves."""
+    page.goto(f"{server}/", wait_until="commit", timeout=FIRST)
+    page.get_by_test_id("stMetricValue").first.wait_for(timeout=FIRST)
+    page.get_by_role("textbox", name="Designation", exact=True).wait_for(timeout=FIRST)
+    page.get_by_test_id("stVegaLiteChart").first.wait_for(timeout=FIRST)
+    wait_idle(page, FIRST)
+    f = fits.fit("25 H7/p6")
+    assert metric_value(page, "Smallest interference") == unitsys.show(f.interference_min_um,
+                                                                       "small_length", "SI")
+    assert page.get_by_role("heading", name="Fit limits", exact=True).is_visible()
+    assert page.get_by_test_id("stSidebar").get_by_text("inch", exact=True).is_visible()
+    assert "/fit-limits" in page.url

@@ -31,6 +31,7 @@ def browser_session(monkeypatch):
             at.query_params.update(query)
         at.run()
         at.session_state[ui_app.SEEN] = False
+        pauses.clear()
         at.switch_page(f"fitcheck/ui/{first_page}.py").run()
         return at
 
@@ -58,7 +59,8 @@ def test_a_first_visit_to_the_press_fit_page_pauses_once_then_draws_the_whole_pa
 
 
 def test_a_session_that_starts_on_another_page_never_pauses(browser_session):
-    at = browser_session("fit_limits")
+    at = browser_session("bearing_seat")
+    assert browser_session.pauses == []
     assert [sc.label for sc in at.sidebar.get("segmented_control")] == ["Units"]
     at.switch_page("fitcheck/ui/press_fit.py").run()
     assert browser_session.pauses == []
@@ -83,3 +85,21 @@ def test_a_first_visit_that_ends_before_the_headline_still_draws_the_controls(br
     assert "Press fit of the case" in [s.label for s in at.selectbox]
     assert at.session_state[ui_app.HEADLINE_ONLY] is False
     assert not at.metric  # no headline: the inputs carry the error
+
+
+def test_the_bare_address_opens_the_fit_limits_page_headline_first(monkeypatch):
+    """``/`` (where ``make app`` lands) goes on to the fit-limits page, whose first run in the
+    session is headline-only: the hidden start page does not count as the session's first run."""
+    pauses: list[float] = []
+    monkeypatch.chdir(ROOT)
+    monkeypatch.setattr(ui_app, "_has_browser", lambda: True)
+    monkeypatch.setattr(ui_app, "_pause", pauses.append)
+    at = AppTest.from_file(str(APP), default_timeout=60).run()
+    assert not at.exception
+    assert pauses == [ui_app.FIRST_PAINT_PAUSE_S]
+    assert [t.value for t in at.title] == ["Fit limits"]
+    # the whole page: the inputs, the unit switch and the limits table after the figures
+    assert at.text_input(key="fl.text").value
+    assert [sc.label for sc in at.sidebar.get("segmented_control")] == ["Units"]
+    assert [m.label for m in at.metric][:1] == ["Smallest interference"]
+    assert at.session_state[ui_app.HEADLINE_ONLY] is False
